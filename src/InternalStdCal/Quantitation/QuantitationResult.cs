@@ -1,0 +1,156 @@
+using System.Collections.Generic;
+using System.Text;
+using InternalStdCal.Calibration;
+using InternalStdCal.Quantities;
+
+namespace InternalStdCal.Quantitation;
+
+/// <summary>Where a result lies relative to the fitted non-blank standards of its calibration.</summary>
+public enum CalibratedRangeStatus
+{
+    /// <summary>Between the lowest and the highest fitted non-blank standard (inclusive).</summary>
+    WithinRange = 0,
+
+    /// <summary>Below the lowest fitted non-blank standard (the LLOQ of ICH M10): extrapolated.</summary>
+    BelowLowestStandard,
+
+    /// <summary>Above the highest fitted standard (the ULOQ): extrapolated.</summary>
+    AboveHighestStandard,
+}
+
+/// <summary>
+/// The concentration of an unknown read off a <see cref="RatioCalibration"/>, in the calibration's unit, with its
+/// standard error, confidence interval, the method used, and whether it was extrapolated.
+/// </summary>
+public sealed class QuantitationResult
+{
+    internal QuantitationResult(
+        UnknownSample sample,
+        RatioModel model,
+        double meanResponse,
+        Concentration concentration,
+        Concentration? standardError,
+        Concentration? lower,
+        Concentration? upper,
+        double confidenceLevel,
+        double? degreesOfFreedom,
+        string method,
+        CalibratedRangeStatus rangeStatus,
+        IReadOnlyList<Concentration> injectionConcentrations,
+        Concentration? injectionStandardDeviation,
+        IReadOnlyList<string> notes)
+    {
+        Sample = sample;
+        Model = model;
+        MeanResponse = meanResponse;
+        Concentration = concentration;
+        StandardError = standardError;
+        Lower = lower;
+        Upper = upper;
+        ConfidenceLevel = confidenceLevel;
+        DegreesOfFreedom = degreesOfFreedom;
+        Method = method;
+        RangeStatus = rangeStatus;
+        InjectionConcentrations = injectionConcentrations;
+        InjectionStandardDeviation = injectionStandardDeviation;
+        Notes = notes;
+    }
+
+    /// <summary>The sample measured.</summary>
+    public UnknownSample Sample { get; }
+
+    /// <summary>The calibration function used.</summary>
+    public RatioModel Model { get; }
+
+    /// <summary>Mean response ratio analyte/IS of the sample's injections.</summary>
+    public double MeanResponse { get; }
+
+    /// <summary>Number of injections averaged (m).</summary>
+    public int Replicates => Sample.Injections.Count;
+
+    /// <summary>The analyte concentration in the measured solution, in the calibration's unit.</summary>
+    public Concentration Concentration { get; }
+
+    /// <summary>Standard error of <see cref="Concentration"/> (s_x0 for regression models); null when the
+    /// calibration gives no spread (single response factor).</summary>
+    public Concentration? StandardError { get; }
+
+    /// <summary>Lower confidence limit; null with <see cref="StandardError"/>, or when the interval is unbounded
+    /// (Fieller interval with an insignificant slope).</summary>
+    public Concentration? Lower { get; }
+
+    /// <summary>Upper confidence limit; null as <see cref="Lower"/>.</summary>
+    public Concentration? Upper { get; }
+
+    /// <summary>Confidence level of the interval, in (0, 1).</summary>
+    public double ConfidenceLevel { get; }
+
+    /// <summary>Degrees of freedom of the standard error and the t quantile; null when no interval.</summary>
+    public double? DegreesOfFreedom { get; }
+
+    /// <summary>How the concentration and its interval were obtained.</summary>
+    public string Method { get; }
+
+    /// <summary>Whether the result lies inside the calibrated range; anything else is an extrapolation.</summary>
+    public CalibratedRangeStatus RangeStatus { get; }
+
+    /// <summary>True when <see cref="RangeStatus"/> is not <see cref="CalibratedRangeStatus.WithinRange"/>.</summary>
+    public bool IsExtrapolated => RangeStatus != CalibratedRangeStatus.WithinRange;
+
+    /// <summary>Concentration read off each injection separately (same unit), in injection order. An injection whose
+    /// response cannot be inverted (quadratic without a real root) is left out, with a note.</summary>
+    public IReadOnlyList<Concentration> InjectionConcentrations { get; }
+
+    /// <summary>Sample standard deviation of <see cref="InjectionConcentrations"/> (replicate spread); null with
+    /// fewer than two values.</summary>
+    public Concentration? InjectionStandardDeviation { get; }
+
+    /// <summary>Anything a reviewer should know (extrapolation, IS concentration differing from the calibration's, …).</summary>
+    public IReadOnlyList<string> Notes { get; }
+
+    /// <summary>The result as a <see cref="Measured{T}"/> (Type A, with the degrees of freedom); null when there is
+    /// no standard error.</summary>
+    public Measured<Concentration>? AsMeasured() => StandardError is Concentration se
+        ? (DegreesOfFreedom is double df && df >= 1
+            ? Measured.TypeA(Concentration, se, df)
+            : Measured.WithStandardUncertainty(Concentration, se, null, UncertaintyEvaluation.TypeA))
+        : null;
+
+    /// <summary>Readable one-paragraph report with units.</summary>
+    /// <returns>The text.</returns>
+    public override string ToString()
+    {
+        var sb = new StringBuilder();
+        sb.Append(Sample.Label).Append(": ").Append(Concentration.ToString("G6", null));
+        if (StandardError is Concentration se)
+        {
+            sb.Append(", s = ").Append(se.ToString("G4", null));
+        }
+
+        if (Lower is Concentration lo && Upper is Concentration hi)
+        {
+            sb.Append(", ").Append(Text.F(100 * ConfidenceLevel, 0)).Append(" % CI [").Append(lo.ToString("G6", null))
+                .Append(", ").Append(hi.ToString("G6", null)).Append(']');
+        }
+
+        if (DegreesOfFreedom is double df)
+        {
+            sb.Append(", ν = ").Append(Text.G(df));
+        }
+
+        sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse))
+            .Append(", ").Append(Method).Append(')');
+        sb.Append(RangeStatus switch
+        {
+            CalibratedRangeStatus.BelowLowestStandard => " — EXTRAPOLATED below the lowest standard",
+            CalibratedRangeStatus.AboveHighestStandard => " — EXTRAPOLATED above the highest standard",
+            _ => string.Empty,
+        });
+        foreach (string note in Notes)
+        {
+            sb.AppendLine().Append("  note: ").Append(note);
+        }
+
+        return sb.ToString();
+    }
+}

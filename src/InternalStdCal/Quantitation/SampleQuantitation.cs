@@ -1,0 +1,116 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using InternalStdCal.Calibration;
+using InternalStdCal.Internal;
+using InternalStdCal.Quantities;
+
+namespace InternalStdCal.Quantitation;
+
+/// <summary>
+/// Reads unknowns off a <see cref="RatioCalibration"/>: mean response ratio of the injections → x on the calibration
+/// axis (inverse prediction with its standard error and interval) → analyte concentration in the measured solution,
+/// using the sample's IS concentration.
+/// </summary>
+/// <remarks>
+/// <para>Ratio axis: C_x = x0·C_is(sample). Concentration axis: C_x = x0·C_is(sample)/C_is(calibration), i.e. the
+/// result is corrected when the sample carries a different IS concentration than the standards (a note says so).
+/// Both follow from y = f(C_x/C_is). The standard error and limits scale by the same positive factor.</para>
+/// <para>The result is flagged as extrapolated when x0 lies outside the fitted non-blank standards (below the lowest
+/// or above the highest); it is still reported.</para>
+/// </remarks>
+public static class SampleQuantitation
+{
+    /// <summary>Quantifies one unknown.</summary>
+    /// <param name="calibration">The calibration.</param>
+    /// <param name="sample">The unknown; its IS concentration must be of the calibration's kind.</param>
+    /// <param name="confidenceLevel">Confidence level of the interval, in (0, 1); default 0.95.</param>
+    /// <returns>The result in the calibration's unit.</returns>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentException">The IS concentration is of another kind than the calibration's unit.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1).</exception>
+    /// <exception cref="InvalidOperationException">The mean response cannot be inverted (quadratic without a real root).</exception>
+    public static QuantitationResult Quantify(RatioCalibration calibration, UnknownSample sample, double confidenceLevel = 0.95)
+    {
+        Guard.NotNull(calibration, nameof(calibration));
+        Guard.NotNull(sample, nameof(sample));
+        Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
+        Concentration isConc = sample.InternalStandardConcentration;
+        if (isConc.Kind != Concentration.KindOf(calibration.Unit))
+        {
+            throw new ArgumentException(
+                $"Parameter 'sample': the IS concentration of '{sample.Label}' is {isConc} ({isConc.Kind}) but the calibration is in {Concentration.SymbolOf(calibration.Unit)} ({Concentration.KindOf(calibration.Unit)}); the kinds must match.",
+                nameof(sample));
+        }
+
+        StandardSet set = calibration.Set;
+        double cIs = isConc.In(calibration.Unit);
+        var notes = new List<string>();
+        if (calibration.Axis == CalibrationAxis.AnalyteConcentration && cIs != set.ReferenceIs)
+        {
+            notes.Add("The sample's IS concentration (" + isConc.ToString("G6", null) + ") differs from the calibration's ("
+                + Text.G(set.ReferenceIs) + " " + set.Symbol + "); the result is scaled by their ratio " + Text.G(cIs / set.ReferenceIs) + ".");
+        }
+
+        double meanRatio = sample.MeanResponse;
+        int m = sample.Injections.Count;
+        AxisPrediction p = calibration.PredictAxis(meanRatio, m, confidenceLevel);
+        notes.AddRange(p.Notes);
+        CalibratedRangeStatus status = p.X < calibration.LowestX ? CalibratedRangeStatus.BelowLowestStandard
+            : p.X > calibration.HighestX ? CalibratedRangeStatus.AboveHighestStandard
+            : CalibratedRangeStatus.WithinRange;
+        if (status != CalibratedRangeStatus.WithinRange)
+        {
+            notes.Add("x0 = " + Text.G(p.X) + " " + calibration.AxisUnitSymbol + " lies outside the calibrated range "
+                + Text.G(calibration.LowestX) + " to " + Text.G(calibration.HighestX) + " " + calibration.AxisUnitSymbol + " (extrapolation).");
+        }
+
+        var perInjection = new List<Concentration>(m);
+        for (int j = 0; j < m; j++)
+        {
+            if (calibration.InverseAxis(sample.Injections[j].Ratio) is double xj)
+            {
+                perInjection.Add(calibration.Conc(set.ToConcentration(xj, cIs)));
+            }
+            else
+            {
+                notes.Add("Injection #" + Text.I(j + 1) + " (ratio " + Text.G(sample.Injections[j].Ratio) + ") cannot be read off the calibration function; left out of the per-injection list.");
+            }
+        }
+
+        Concentration? spread = null;
+        if (perInjection.Count > 1)
+        {
+            double[] values = perInjection.Select(c => c.Value).ToArray();
+            spread = calibration.Conc(ResponseFactorCalibration.StandardDeviation(values, ResponseFactorCalibration.Mean(values)));
+        }
+
+        return new QuantitationResult(
+            sample,
+            calibration.Model,
+            meanRatio,
+            calibration.Conc(set.ToConcentration(p.X, cIs)),
+            p.StandardError is double se ? calibration.Conc(set.ToConcentration(se, cIs)) : null,
+            p.Lower is double lo ? calibration.Conc(set.ToConcentration(lo, cIs)) : null,
+            p.Upper is double hi ? calibration.Conc(set.ToConcentration(hi, cIs)) : null,
+            confidenceLevel,
+            p.DegreesOfFreedom,
+            p.Method,
+            status,
+            perInjection,
+            spread,
+            notes);
+    }
+
+    /// <summary>Quantifies several unknowns with the same calibration.</summary>
+    /// <param name="calibration">The calibration.</param>
+    /// <param name="samples">The unknowns.</param>
+    /// <param name="confidenceLevel">Confidence level, in (0, 1).</param>
+    /// <returns>One result per sample, in order.</returns>
+    /// <exception cref="ArgumentNullException">An argument or element is null.</exception>
+    /// <exception cref="ArgumentException">A sample's IS concentration is of another kind.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1).</exception>
+    /// <exception cref="InvalidOperationException">A mean response cannot be inverted.</exception>
+    public static IReadOnlyList<QuantitationResult> QuantifyAll(RatioCalibration calibration, IEnumerable<UnknownSample> samples, double confidenceLevel = 0.95) =>
+        Guard.NotNull(samples, nameof(samples)).Select(s => Quantify(calibration, s, confidenceLevel)).ToList();
+}
