@@ -1,29 +1,30 @@
 using System;
 using System.Collections.Generic;
+using InternalStdCal.Internal;
 
 namespace InternalStdCal.Calibration;
 
 /// <summary>An F test: statistic, degrees of freedom, critical value F(1 − α; ν1, ν2) and p-value.</summary>
 public sealed class FTestResult
 {
-    internal FTestResult(double statistic, double numeratorDf, double denominatorDf, double significanceLevel)
+    internal FTestResult(double statistic, int numeratorDf, int denominatorDf, double significanceLevel)
     {
         Statistic = statistic;
         NumeratorDegreesOfFreedom = numeratorDf;
         DenominatorDegreesOfFreedom = denominatorDf;
         SignificanceLevel = significanceLevel;
-        CriticalValue = Quantiles.F(1 - significanceLevel, numeratorDf, denominatorDf);
-        PValue = Quantiles.FUpperTail(statistic, numeratorDf, denominatorDf);
+        CriticalValue = FQuantile.Quantile(1 - significanceLevel, numeratorDf, denominatorDf);
+        PValue = FQuantile.UpperTail(statistic, numeratorDf, denominatorDf);
     }
 
     /// <summary>The test statistic (dimensionless, ≥ 0).</summary>
     public double Statistic { get; }
 
     /// <summary>Numerator degrees of freedom ν1.</summary>
-    public double NumeratorDegreesOfFreedom { get; }
+    public int NumeratorDegreesOfFreedom { get; }
 
     /// <summary>Denominator degrees of freedom ν2.</summary>
-    public double DenominatorDegreesOfFreedom { get; }
+    public int DenominatorDegreesOfFreedom { get; }
 
     /// <summary>Significance level α.</summary>
     public double SignificanceLevel { get; }
@@ -40,8 +41,8 @@ public sealed class FTestResult
     /// <summary>Prints "F = 1.56 vs F(0.99; 1, 4) = 21.2, p = 0.28".</summary>
     /// <returns>The text.</returns>
     public override string ToString() =>
-        "F = " + Text.G(Statistic) + " vs F(" + Text.G(1 - SignificanceLevel) + "; " + Text.G(NumeratorDegreesOfFreedom) + ", "
-        + Text.G(DenominatorDegreesOfFreedom) + ") = " + Text.G(CriticalValue) + ", p = " + Text.G(PValue);
+        "F = " + Text.G(Statistic) + " vs F(" + Text.G(1 - SignificanceLevel) + "; " + Text.I(NumeratorDegreesOfFreedom) + ", "
+        + Text.I(DenominatorDegreesOfFreedom) + ") = " + Text.G(CriticalValue) + ", p = " + Text.G(PValue);
 }
 
 /// <summary>Lack-of-fit F test with replicated standards: the residual sum of squares split into pure error
@@ -163,7 +164,7 @@ public sealed class MandelTest
     public override string ToString() =>
         "Mandel (ISO 8466-1): s_y1 = " + Text.G(ResidualStandardDeviationLinear) + ", s_y2 = " + Text.G(ResidualStandardDeviationQuadratic)
         + ", DS² = " + Text.G(DifferenceOfVariances) + ", PG = " + Text.G(Test.Statistic) + " vs F(" + Text.G(1 - Test.SignificanceLevel) + "; 1, "
-        + Text.G(Test.DenominatorDegreesOfFreedom) + ") = " + Text.G(Test.CriticalValue) + " → "
+        + Text.I(Test.DenominatorDegreesOfFreedom) + ") = " + Text.G(Test.CriticalValue) + " → "
         + (Test.IsSignificant ? "the second-order function fits significantly better" : "the straight line is adequate");
 
     internal static MandelTest? Compute(double sseLinear, double sseQuadratic, int n, double alpha, List<string> notes)
@@ -233,7 +234,7 @@ public sealed class VarianceHomogeneityTest
     public override string ToString() =>
         "variance homogeneity (ISO 8466-1): s² = " + Text.G(VarianceLowest) + " at '" + LowestLevel + "' (n = " + Text.I(ReplicatesLowest) + "), "
         + Text.G(VarianceHighest) + " at '" + HighestLevel + "' (n = " + Text.I(ReplicatesHighest) + "); PG = " + Text.G(Test.Statistic)
-        + " vs F(" + Text.G(1 - Test.SignificanceLevel) + "; " + Text.G(Test.NumeratorDegreesOfFreedom) + ", " + Text.G(Test.DenominatorDegreesOfFreedom) + ") = "
+        + " vs F(" + Text.G(1 - Test.SignificanceLevel) + "; " + Text.I(Test.NumeratorDegreesOfFreedom) + ", " + Text.I(Test.DenominatorDegreesOfFreedom) + ") = "
         + Text.G(Test.CriticalValue) + " → " + (IsHeteroscedastic ? "variances differ: consider a weighted fit" : "variances homogeneous: an unweighted fit is justified");
 
     internal static VarianceHomogeneityTest? Compute(StandardSet set, double alpha, List<string> notes)

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Globalization;
 using System.Text;
+using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
 
 namespace InternalStdCal.Calibration;
@@ -139,7 +140,7 @@ public abstract class RatioCalibration
     public override string ToString() => Summary();
 
     /// <summary>Inverse prediction of x for the mean ratio of <paramref name="replicates"/> injections of an unknown.</summary>
-    internal abstract AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel);
+    internal abstract AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method);
 
     /// <summary>x on the calibration axis for one response; null when the function cannot be inverted there.</summary>
     internal abstract double? InverseAxis(double response);

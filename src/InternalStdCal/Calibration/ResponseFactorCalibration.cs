@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Text;
 using InternalStdCal.Internal;
+using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
 
 namespace InternalStdCal.Calibration;
@@ -121,10 +122,15 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// standards scatter with relative SD s_rel, the mean RF of n has s_rel/√n, and the mean of m sample ratios
     /// s_rel/√m, so u_rel = s_rel·sqrt(1/m + 1/n) with n − 1 degrees of freedom (delta method; common practice,
     /// the analogue of s_x0 for this model).</summary>
-    internal override AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel)
+    internal override AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
     {
         double x = InverseAxis(meanRatio)!.Value;
         var notes = new List<string>();
+        if (method == InverseIntervalMethod.Fieller)
+        {
+            notes.Add("Fieller's interval applies to straight-line regressions; the response-factor model gives the symmetric interval.");
+        }
+
         if (ResponseFactorStandardDeviation is not double sd)
         {
             notes.Add("Single response factor: no spread is available, so no standard error or interval.");
@@ -133,7 +139,7 @@ public sealed class ResponseFactorCalibration : RatioCalibration
 
         int n = ResponseFactorCount;
         double se = Math.Abs(x) * sd / MeanResponseFactor * Math.Sqrt((1.0 / replicates) + (1.0 / n));
-        double t = Quantiles.StudentT(1 - ((1 - confidenceLevel) / 2), n - 1);
+        double t = StudentTQuantile.TwoSided(confidenceLevel, n - 1);
         return new AxisPrediction(x, se, x - (t * se), x + (t * se), n - 1, "mean response factor, relative SD of the RFs: s = C·RSD·sqrt(1/m + 1/n)", notes);
     }
 

@@ -5,19 +5,6 @@ using InternalStdCal.Quantities;
 
 namespace InternalStdCal.Quantitation;
 
-/// <summary>Where a result lies relative to the fitted non-blank standards of its calibration.</summary>
-public enum CalibratedRangeStatus
-{
-    /// <summary>Between the lowest and the highest fitted non-blank standard (inclusive).</summary>
-    WithinRange = 0,
-
-    /// <summary>Below the lowest fitted non-blank standard (the LLOQ of ICH M10): extrapolated.</summary>
-    BelowLowestStandard,
-
-    /// <summary>Above the highest fitted standard (the ULOQ): extrapolated.</summary>
-    AboveHighestStandard,
-}
-
 /// <summary>
 /// The concentration of an unknown read off a <see cref="RatioCalibration"/>, in the calibration's unit, with its
 /// standard error, confidence interval, the method used, and whether it was extrapolated.
@@ -35,7 +22,7 @@ public sealed class QuantitationResult
         double confidenceLevel,
         double? degreesOfFreedom,
         string method,
-        CalibratedRangeStatus rangeStatus,
+        ExtrapolationStatus extrapolation,
         IReadOnlyList<Concentration> injectionConcentrations,
         Concentration? injectionStandardDeviation,
         IReadOnlyList<string> notes)
@@ -50,7 +37,7 @@ public sealed class QuantitationResult
         ConfidenceLevel = confidenceLevel;
         DegreesOfFreedom = degreesOfFreedom;
         Method = method;
-        RangeStatus = rangeStatus;
+        Extrapolation = extrapolation;
         InjectionConcentrations = injectionConcentrations;
         InjectionStandardDeviation = injectionStandardDeviation;
         Notes = notes;
@@ -91,11 +78,12 @@ public sealed class QuantitationResult
     /// <summary>How the concentration and its interval were obtained.</summary>
     public string Method { get; }
 
-    /// <summary>Whether the result lies inside the calibrated range; anything else is an extrapolation.</summary>
-    public CalibratedRangeStatus RangeStatus { get; }
+    /// <summary>Where x0 lies relative to the fitted non-blank standards (a blank is not the lower end of the
+    /// calibrated range); anything but <see cref="ExtrapolationStatus.WithinRange"/> is an extrapolation.</summary>
+    public ExtrapolationStatus Extrapolation { get; }
 
-    /// <summary>True when <see cref="RangeStatus"/> is not <see cref="CalibratedRangeStatus.WithinRange"/>.</summary>
-    public bool IsExtrapolated => RangeStatus != CalibratedRangeStatus.WithinRange;
+    /// <summary>True when <see cref="Extrapolation"/> is not <see cref="ExtrapolationStatus.WithinRange"/>.</summary>
+    public bool IsExtrapolated => Extrapolation != ExtrapolationStatus.WithinRange;
 
     /// <summary>Concentration read off each injection separately (same unit), in injection order. An injection whose
     /// response cannot be inverted (quadratic without a real root) is left out, with a note.</summary>
@@ -140,10 +128,10 @@ public sealed class QuantitationResult
 
         sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse))
             .Append(", ").Append(Method).Append(')');
-        sb.Append(RangeStatus switch
+        sb.Append(Extrapolation switch
         {
-            CalibratedRangeStatus.BelowLowestStandard => " — EXTRAPOLATED below the lowest standard",
-            CalibratedRangeStatus.AboveHighestStandard => " — EXTRAPOLATED above the highest standard",
+            ExtrapolationStatus.BelowLowestStandard => " — EXTRAPOLATED below the lowest standard",
+            ExtrapolationStatus.AboveHighestStandard => " — EXTRAPOLATED above the highest standard",
             _ => string.Empty,
         });
         foreach (string note in Notes)

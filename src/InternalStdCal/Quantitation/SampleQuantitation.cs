@@ -25,12 +25,15 @@ public static class SampleQuantitation
     /// <param name="calibration">The calibration.</param>
     /// <param name="sample">The unknown; its IS concentration must be of the calibration's kind.</param>
     /// <param name="confidenceLevel">Confidence level of the interval, in (0, 1); default 0.95.</param>
+    /// <param name="intervalMethod">Symmetric (default) or Fieller interval (straight lines).</param>
     /// <returns>The result in the calibration's unit.</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
-    /// <exception cref="ArgumentException">The IS concentration is of another kind than the calibration's unit.</exception>
+    /// <exception cref="ArgumentException">The IS concentration is of another kind than the calibration's unit, or the
+    /// mean response cannot be read off the calibration function (a quadratic that never reaches it).</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1).</exception>
-    /// <exception cref="InvalidOperationException">The mean response cannot be inverted (quadratic without a real root).</exception>
-    public static QuantitationResult Quantify(RatioCalibration calibration, UnknownSample sample, double confidenceLevel = 0.95)
+    /// <exception cref="InvalidOperationException">The calibration's sensitivity is 0 at the result (zero slope, or the
+    /// vertex of a parabola), so no standard error exists.</exception>
+    public static QuantitationResult Quantify(RatioCalibration calibration, UnknownSample sample, double confidenceLevel = 0.95, InverseIntervalMethod intervalMethod = InverseIntervalMethod.Symmetric)
     {
         Guard.NotNull(calibration, nameof(calibration));
         Guard.NotNull(sample, nameof(sample));
@@ -54,12 +57,21 @@ public static class SampleQuantitation
 
         double meanRatio = sample.MeanResponse;
         int m = sample.Injections.Count;
-        AxisPrediction p = calibration.PredictAxis(meanRatio, m, confidenceLevel);
+        AxisPrediction p;
+        try
+        {
+            p = calibration.PredictAxis(meanRatio, m, confidenceLevel, intervalMethod);
+        }
+        catch (ArgumentOutOfRangeException e) when (e.ParamName == "response")
+        {
+            throw new ArgumentException($"Parameter 'sample': the mean ratio of '{sample.Label}' cannot be read off the calibration function. {e.Message}", nameof(sample), e);
+        }
+
         notes.AddRange(p.Notes);
-        CalibratedRangeStatus status = p.X < calibration.LowestX ? CalibratedRangeStatus.BelowLowestStandard
-            : p.X > calibration.HighestX ? CalibratedRangeStatus.AboveHighestStandard
-            : CalibratedRangeStatus.WithinRange;
-        if (status != CalibratedRangeStatus.WithinRange)
+        ExtrapolationStatus status = p.X < calibration.LowestX ? ExtrapolationStatus.BelowLowestStandard
+            : p.X > calibration.HighestX ? ExtrapolationStatus.AboveHighestStandard
+            : ExtrapolationStatus.WithinRange;
+        if (status != ExtrapolationStatus.WithinRange)
         {
             notes.Add("x0 = " + Text.G(p.X) + " " + calibration.AxisUnitSymbol + " lies outside the calibrated range "
                 + Text.G(calibration.LowestX) + " to " + Text.G(calibration.HighestX) + " " + calibration.AxisUnitSymbol + " (extrapolation).");
@@ -106,11 +118,12 @@ public static class SampleQuantitation
     /// <param name="calibration">The calibration.</param>
     /// <param name="samples">The unknowns.</param>
     /// <param name="confidenceLevel">Confidence level, in (0, 1).</param>
+    /// <param name="intervalMethod">Symmetric (default) or Fieller interval.</param>
     /// <returns>One result per sample, in order.</returns>
     /// <exception cref="ArgumentNullException">An argument or element is null.</exception>
-    /// <exception cref="ArgumentException">A sample's IS concentration is of another kind.</exception>
+    /// <exception cref="ArgumentException">As for <see cref="Quantify"/>.</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1).</exception>
-    /// <exception cref="InvalidOperationException">A mean response cannot be inverted.</exception>
-    public static IReadOnlyList<QuantitationResult> QuantifyAll(RatioCalibration calibration, IEnumerable<UnknownSample> samples, double confidenceLevel = 0.95) =>
-        Guard.NotNull(samples, nameof(samples)).Select(s => Quantify(calibration, s, confidenceLevel)).ToList();
+    /// <exception cref="InvalidOperationException">As for <see cref="Quantify"/>.</exception>
+    public static IReadOnlyList<QuantitationResult> QuantifyAll(RatioCalibration calibration, IEnumerable<UnknownSample> samples, double confidenceLevel = 0.95, InverseIntervalMethod intervalMethod = InverseIntervalMethod.Symmetric) =>
+        Guard.NotNull(samples, nameof(samples)).Select(s => Quantify(calibration, s, confidenceLevel, intervalMethod)).ToList();
 }

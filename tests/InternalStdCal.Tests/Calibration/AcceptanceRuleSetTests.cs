@@ -12,7 +12,7 @@ public class AcceptanceRuleSetTests
     [Fact]
     public void UsEpa8000D_AverageRfWithSmallRsd_IsAccepted()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         AcceptanceVerdict verdict = AcceptanceRuleSet.UsEpa8000D.Evaluate(cal);
 
@@ -28,7 +28,7 @@ public class AcceptanceRuleSetTests
     [Fact]
     public void IchM10_FiveLevels_IsRejectedForTooFewLevels()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         AcceptanceVerdict verdict = AcceptanceRuleSet.IchM10Chromatographic.Evaluate(cal);
 
@@ -74,7 +74,7 @@ public class AcceptanceRuleSetTests
     [Fact]
     public void CustomRules_TightLimit_ListsTheFailingCalibratorWithItsError()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
         var rules = new AcceptanceRuleSet("Lab SOP (test)", "invented for this test") { MaxAbsRelativeErrorPercent = 1 };
 
         AcceptanceVerdict verdict = rules.Evaluate(cal);
@@ -91,7 +91,7 @@ public class AcceptanceRuleSetTests
     [Fact]
     public void CustomRules_LowestLevelLimit_AppliesOnlyToTheLowestLevel()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
         var rules = new AcceptanceRuleSet("Low end only", "invented for this test") { MaxAbsRelativeErrorAtLowestLevelPercent = 0.5 };
 
         AcceptanceVerdict verdict = rules.Evaluate(cal);
@@ -106,7 +106,7 @@ public class AcceptanceRuleSetTests
     [Fact]
     public void Evaluate_SinglePointUnderEpa_FailsBecauseRsdCannotBeEvaluated()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.FitSinglePoint(ReferenceData.ConstructedRf()[0]);
+        ResponseFactorCalibration cal = ResponseFactorCalibration.FitSinglePoint(FieldReferenceStandards.ConstructedRf()[0]);
 
         AcceptanceVerdict verdict = AcceptanceRuleSet.UsEpa8000D.Evaluate(cal);
 

@@ -12,7 +12,7 @@ public class RatioCalibrationTests
     [Fact]
     public void Fit_MixedUnitsOfOneKind_AreConvertedToTheFirstStandardsUnit()
     {
-        List<CalibrationStandard> standards = ReferenceData.ConstructedRf().ToList();
+        List<CalibrationStandard> standards = FieldReferenceStandards.ConstructedRf().ToList();
         CalibrationStandard s = standards[4];
         standards[4] = new CalibrationStandard(s.Label, Concentration.FromMilligramsPerLitre(0.020), Concentration.FromMilligramsPerLitre(0.005), s.Injections);
 
@@ -28,7 +28,7 @@ public class RatioCalibrationTests
     public void Fit_RequestedUnit_ReportsEverythingInIt()
     {
         ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(
-            ReferenceData.ConstructedRf(),
+            FieldReferenceStandards.ConstructedRf(),
             new CalibrationOptions { Unit = ConcentrationUnit.NanogramPerLitre });
 
         // Back-calculated 1.00979 µg/L = 1009.79 ng/L (field-reference §0, computed).
@@ -39,8 +39,8 @@ public class RatioCalibrationTests
     [Fact]
     public void Fit_KindMismatch_IsRefused()
     {
-        List<CalibrationStandard> standards = ReferenceData.ConstructedRf().ToList();
-        standards[1] = CalibrationStandard.Create("MOLAR", Concentration.FromMicromolesPerLitre(2), ReferenceData.Ug(5), new Injection(1, 1));
+        List<CalibrationStandard> standards = FieldReferenceStandards.ConstructedRf().ToList();
+        standards[1] = CalibrationStandard.Create("MOLAR", Concentration.FromMicromolesPerLitre(2), FieldReferenceStandards.Ug(5), new Injection(1, 1));
 
         var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(standards));
 
@@ -53,7 +53,7 @@ public class RatioCalibrationTests
     public void Fit_RequestedUnitOfAnotherKind_IsRefused()
     {
         var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(
-            ReferenceData.ConstructedRf(),
+            FieldReferenceStandards.ConstructedRf(),
             new CalibrationOptions { Unit = ConcentrationUnit.MilligramPerKilogram }));
 
         Assert.Contains("mg/kg is a MassFraction", ex.Message, StringComparison.Ordinal);
@@ -62,9 +62,9 @@ public class RatioCalibrationTests
     [Fact]
     public void Fit_VaryingIsOnConcentrationAxis_IsRefusedWithAdvice()
     {
-        List<CalibrationStandard> standards = ReferenceData.ConstructedRf().ToList();
+        List<CalibrationStandard> standards = FieldReferenceStandards.ConstructedRf().ToList();
         CalibrationStandard s = standards[2];
-        standards[2] = new CalibrationStandard(s.Label, s.AnalyteConcentration, ReferenceData.Ug(6), s.Injections);
+        standards[2] = new CalibrationStandard(s.Label, s.AnalyteConcentration, FieldReferenceStandards.Ug(6), s.Injections);
 
         var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(standards));
 
@@ -76,9 +76,9 @@ public class RatioCalibrationTests
     public void Fit_VaryingIsOnRatioAxis_UsesConcentrationRatios()
     {
         // Doubling C_is and A_is of one standard leaves RF = (A_x·C_is)/(A_is·C_x) unchanged (SW-846 8000C §11.4.3).
-        List<CalibrationStandard> standards = ReferenceData.ConstructedRf().ToList();
+        List<CalibrationStandard> standards = FieldReferenceStandards.ConstructedRf().ToList();
         CalibrationStandard s = standards[2];
-        standards[2] = CalibrationStandard.Create(s.Label, s.AnalyteConcentration, ReferenceData.Ug(10), new Injection(s.Injections[0].AnalyteSignal, 2 * s.Injections[0].InternalStandardSignal));
+        standards[2] = CalibrationStandard.Create(s.Label, s.AnalyteConcentration, FieldReferenceStandards.Ug(10), new Injection(s.Injections[0].AnalyteSignal, 2 * s.Injections[0].InternalStandardSignal));
 
         ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(standards, new CalibrationOptions { Axis = CalibrationAxis.ConcentrationRatio });
 
@@ -91,7 +91,7 @@ public class RatioCalibrationTests
     [Fact]
     public void Fit_DuplicateLabelsNullsAndEmpty_AreRefused()
     {
-        List<CalibrationStandard> standards = ReferenceData.ConstructedRf().ToList();
+        List<CalibrationStandard> standards = FieldReferenceStandards.ConstructedRf().ToList();
         standards.Add(standards[0]);
 
         var dup = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(standards));
@@ -104,7 +104,7 @@ public class RatioCalibrationTests
     [Fact]
     public void Fit_OnlyBlanksExcluded_IsRefused()
     {
-        var blank = CalibrationStandard.Create("B", ReferenceData.Ug(0), ReferenceData.Ug(5), new Injection(1, 100));
+        var blank = CalibrationStandard.Create("B", FieldReferenceStandards.Ug(0), FieldReferenceStandards.Ug(5), new Injection(1, 100));
 
         var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(new[] { blank }, new CalibrationOptions { Blanks = BlankHandling.Exclude }));
 

@@ -11,7 +11,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_ConstructedDataSet_ResponseFactorsMatchFieldReference()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         // RF_i = (A_x·C_is)/(A_is·C_x), SW-846 8000C §11.4.3; values computed (field-reference §0).
         double[] expected = { 1.025000, 1.020508, 1.012121, 1.018701, 0.998996 };
@@ -28,7 +28,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_ConstructedDataSet_MeanSdRsdMatchFieldReference()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         // mean RF = 1.015065, SD = 0.0101048, RSD = 0.99548 %: computed (field-reference §0).
         Assert.Equal(1.015065, cal.MeanResponseFactor, 6);
@@ -39,7 +39,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_ConstructedDataSet_BackCalculatedAndRseMatchFieldReference()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         // Back-calculated with mean RF: computed (field-reference §0).
         double[] back = { 1.00979, 2.01072, 4.98550, 10.0358, 19.6834 };
@@ -59,7 +59,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_RelativeErrorOfEachStandard_IsBackCalculatedMinusNominalOverNominal()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         // %RE = 100·(x' − x)/x (US EPA 8000D RSE term); first standard: 100·(1.00979 − 1)/1, computed (field-reference §0).
         Assert.Equal(0.979, cal.Standards[0].RelativeErrorPercent!.Value, 3);
@@ -73,7 +73,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void FitSinglePoint_OneStandard_GivesItsResponseFactorAndNoSpread()
     {
-        CalibrationStandard s = ReferenceData.ConstructedRf()[2];
+        CalibrationStandard s = FieldReferenceStandards.ConstructedRf()[2];
 
         ResponseFactorCalibration cal = ResponseFactorCalibration.FitSinglePoint(s);
 
@@ -89,8 +89,8 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_IncludedBlank_IsRefusedWithReason()
     {
-        var standards = ReferenceData.ConstructedRf().ToList();
-        standards.Add(CalibrationStandard.Create("BLANK", ReferenceData.Ug(0), ReferenceData.Ug(5), new Injection(12, 50000)));
+        var standards = FieldReferenceStandards.ConstructedRf().ToList();
+        standards.Add(CalibrationStandard.Create("BLANK", FieldReferenceStandards.Ug(0), FieldReferenceStandards.Ug(5), new Injection(12, 50000)));
 
         var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(standards));
 
@@ -102,8 +102,8 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Fit_ExcludedBlank_IsListedAndRecordedButNotAveraged()
     {
-        var standards = ReferenceData.ConstructedRf().ToList();
-        standards.Insert(0, CalibrationStandard.Create("BLANK", ReferenceData.Ug(0), ReferenceData.Ug(5), new Injection(12, 50000)));
+        var standards = FieldReferenceStandards.ConstructedRf().ToList();
+        standards.Insert(0, CalibrationStandard.Create("BLANK", FieldReferenceStandards.Ug(0), FieldReferenceStandards.Ug(5), new Injection(12, 50000)));
 
         ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(standards, new CalibrationOptions { Blanks = BlankHandling.Exclude });
 
@@ -119,7 +119,7 @@ public class ResponseFactorCalibrationTests
     public void Fit_LevelMeans_AveragesOneFactorPerLevel()
     {
         // Two injections per level whose ratios average to the §0 ratios: level RFs and mean RF as in §0 (computed).
-        var standards = ReferenceData.ConstructedRf().Select(s => CalibrationStandard.Create(
+        var standards = FieldReferenceStandards.ConstructedRf().Select(s => CalibrationStandard.Create(
             s.Label,
             s.AnalyteConcentration,
             s.InternalStandardConcentration,
@@ -141,7 +141,7 @@ public class ResponseFactorCalibrationTests
     [Fact]
     public void Summary_ListsModelRfStatisticsAndUnits()
     {
-        string text = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf()).Summary();
+        string text = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf()).Summary();
 
         Assert.Contains("average response factor", text, StringComparison.Ordinal);
         Assert.Contains("mean = 1.01507", text, StringComparison.Ordinal);

@@ -12,23 +12,23 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_MeanRfModel_MatchesFieldReferenceUnknown()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
-        var sample = UnknownSample.Create("U-1", ReferenceData.Ug(5), new Injection(30000, 48000));
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
+        var sample = UnknownSample.Create("U-1", FieldReferenceStandards.Ug(5), new Injection(30000, 48000));
 
         QuantitationResult r = SampleQuantitation.Quantify(cal, sample);
 
         // C_x = A_x·C_is/(A_is·mean RF) = 3.07862 (SW-846 8000C §11.4.3; computed, field-reference §0).
         Assert.Equal(ConcentrationUnit.MicrogramPerLitre, r.Concentration.Unit);
         Assert.Equal(3.07862, r.Concentration.Value, 5);
-        Assert.Equal(CalibratedRangeStatus.WithinRange, r.RangeStatus);
+        Assert.Equal(ExtrapolationStatus.WithinRange, r.Extrapolation);
         Assert.Equal(RatioModel.AverageResponseFactor, r.Model);
     }
 
     [Fact]
     public void Quantify_MeanRfModel_SpreadFollowsTheDocumentedRelativeModel()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
-        var sample = UnknownSample.Create("U-1", ReferenceData.Ug(5), new Injection(30000, 48000), new Injection(30300, 48100));
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
+        var sample = UnknownSample.Create("U-1", FieldReferenceStandards.Ug(5), new Injection(30000, 48000), new Injection(30300, 48100));
 
         QuantitationResult r = SampleQuantitation.Quantify(cal, sample);
 
@@ -48,9 +48,9 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_SinglePoint_HasNoIntervalAndSaysWhy()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.FitSinglePoint(ReferenceData.ConstructedRf()[2]);
+        ResponseFactorCalibration cal = ResponseFactorCalibration.FitSinglePoint(FieldReferenceStandards.ConstructedRf()[2]);
 
-        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", ReferenceData.Ug(5), new Injection(50100, 49500)));
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", FieldReferenceStandards.Ug(5), new Injection(50100, 49500)));
 
         // The standard's own signals read back its nominal 5 µg/L exactly (RF definition, SW-846 8000C §11.4.3).
         Assert.Equal(5, r.Concentration.Value, 12);
@@ -61,16 +61,16 @@ public class SampleQuantitationTests
     }
 
     [Theory]
-    [InlineData(0.01, CalibratedRangeStatus.BelowLowestStandard)]
-    [InlineData(5.0, CalibratedRangeStatus.AboveHighestStandard)]
-    public void Quantify_OutsideStandards_IsFlaggedNeverSilent(double ratio, CalibratedRangeStatus expected)
+    [InlineData(0.01, ExtrapolationStatus.BelowLowestStandard)]
+    [InlineData(5.0, ExtrapolationStatus.AboveHighestStandard)]
+    public void Quantify_OutsideStandards_IsFlaggedNeverSilent(double ratio, ExtrapolationStatus expected)
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
-        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", ReferenceData.Ug(5), new Injection(ratio * 1000, 1000)));
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", FieldReferenceStandards.Ug(5), new Injection(ratio * 1000, 1000)));
 
         // Range of the standards 1–20 µg/L (field-reference §0): ratio 0.01 → ~0.05 µg/L, ratio 5 → ~24.6 µg/L.
-        Assert.Equal(expected, r.RangeStatus);
+        Assert.Equal(expected, r.Extrapolation);
         Assert.True(r.IsExtrapolated);
         Assert.Contains("EXTRAPOLATED", r.ToString(), StringComparison.Ordinal);
         Assert.Contains(r.Notes, n => n.Contains("outside the calibrated range", StringComparison.Ordinal));
@@ -79,9 +79,9 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_SampleWithDifferentIsConcentration_ScalesAndNotes()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
-        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", ReferenceData.Ug(10), new Injection(30000, 48000)));
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", FieldReferenceStandards.Ug(10), new Injection(30000, 48000)));
 
         // C_x = A_x·C_is/(A_is·mean RF) with C_is = 10: twice 3.07862 (SW-846 8000C §11.4.3; field-reference §0).
         Assert.Equal(2 * 3.07862, r.Concentration.Value, 4);
@@ -91,7 +91,7 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_IsInAnotherUnitOfTheSameKind_IsConverted()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
         QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", Concentration.FromMilligramsPerLitre(0.005), new Injection(30000, 48000)));
 
@@ -103,7 +103,7 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_IsOfAnotherKind_IsRefused()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
         var sample = UnknownSample.Create("U-9", Concentration.FromMicromolesPerLitre(5), new Injection(30000, 48000));
 
         var ex = Assert.Throws<ArgumentException>(() => SampleQuantitation.Quantify(cal, sample));
@@ -115,9 +115,9 @@ public class SampleQuantitationTests
     [Fact]
     public void Quantify_BadConfidenceLevel_IsRefused()
     {
-        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(ReferenceData.ConstructedRf());
+        ResponseFactorCalibration cal = ResponseFactorCalibration.Fit(FieldReferenceStandards.ConstructedRf());
 
-        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => SampleQuantitation.Quantify(cal, UnknownSample.Create("U", ReferenceData.Ug(5), new Injection(1, 1)), 1.0));
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => SampleQuantitation.Quantify(cal, UnknownSample.Create("U", FieldReferenceStandards.Ug(5), new Injection(1, 1)), 1.0));
 
         Assert.Equal("confidenceLevel", ex.ParamName);
         Assert.Contains("was 1; it must be a number in the open interval (0, 1)", ex.Message, StringComparison.Ordinal);
@@ -126,11 +126,11 @@ public class SampleQuantitationTests
     [Fact]
     public void UnknownSample_BadInput_IsRefused()
     {
-        var e1 = Assert.Throws<ArgumentOutOfRangeException>(() => UnknownSample.Create("U", ReferenceData.Ug(0), new Injection(1, 1)));
+        var e1 = Assert.Throws<ArgumentOutOfRangeException>(() => UnknownSample.Create("U", FieldReferenceStandards.Ug(0), new Injection(1, 1)));
         Assert.Contains("was 0 µg/L; it must be > 0", e1.Message, StringComparison.Ordinal);
-        var e2 = Assert.Throws<ArgumentException>(() => UnknownSample.Create("U", ReferenceData.Ug(1)));
+        var e2 = Assert.Throws<ArgumentException>(() => UnknownSample.Create("U", FieldReferenceStandards.Ug(1)));
         Assert.Equal("injections", e2.ParamName);
-        Assert.Throws<ArgumentNullException>(() => UnknownSample.Create("U", ReferenceData.Ug(1), new Injection[] { null! }));
-        Assert.Equal(2.5, UnknownSample.Create("U", ReferenceData.Ug(1), new Injection(2, 1), new Injection(3, 1)).MeanResponse);
+        Assert.Throws<ArgumentNullException>(() => UnknownSample.Create("U", FieldReferenceStandards.Ug(1), new Injection[] { null! }));
+        Assert.Equal(2.5, UnknownSample.Create("U", FieldReferenceStandards.Ug(1), new Injection(2, 1), new Injection(3, 1)).MeanResponse);
     }
 }
