@@ -1,4 +1,5 @@
 using System;
+using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -132,5 +133,120 @@ public class SampleQuantitationTests
         Assert.Equal("injections", e2.ParamName);
         Assert.Throws<ArgumentNullException>(() => UnknownSample.Create("U", FieldReferenceStandards.Ug(1), new Injection[] { null! }));
         Assert.Equal(2.5, UnknownSample.Create("U", FieldReferenceStandards.Ug(1), new Injection(2, 1), new Injection(3, 1)).MeanResponse);
+    }
+
+    [Fact]
+    public void Quantify_OlsLine_MatchesFieldReferenceUnknown()
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.ConstructedRf(), CalibrationModel.Linear);
+
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U-1", FieldReferenceStandards.Ug(5), new Injection(30000, 48000)));
+
+        // Unknown A_x = 30000, A_is = 48000 → 3.059656 with the OLS ratio line (computed, field-reference §0).
+        Assert.Equal(3.059656, r.Concentration.Value, 6);
+        Assert.Equal(RatioModel.Linear, r.Model);
+        Assert.Equal(3, r.DegreesOfFreedom);
+    }
+
+    [Theory]
+    [InlineData(2.9, 1, 0.7160037, 0.26457, 0.680098)]
+    [InlineData(13.5, 1, 6.2072155, 0.239754, 0.616308)]
+    [InlineData(23.0, 1, 11.128585, 0.263193, 0.676560)]
+    [InlineData(2.9, 3, 0.7160037, 0.19099, null)]
+    [InlineData(13.5, 4, 6.2072155, 0.140613, null)]
+    public void Quantify_FluorescenceLine_MatchesFieldReferenceInversePrediction(double y0, int m, double x0, double sx0, double? halfWidth)
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Linear);
+        Injection[] injections = Enumerable.Repeat(new Injection(y0, 1), m).ToArray();
+
+        QuantitationResult r = SampleQuantitation.Quantify(cal, new UnknownSample("U", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), injections));
+
+        // x0 = (ȳ0 − a)/b, s_x0 = (s/b)·sqrt(1/m + 1/n + (ȳ0 − ȳ)²/(b²Sxx)) (VERIFIED formula; values computed, field-reference §1.2).
+        Assert.Equal(x0, r.Concentration.Value, 6);
+        Assert.Equal(ConcentrationUnit.NanogramPerLitre, r.Concentration.Unit);
+        Assert.Equal(sx0, r.StandardError!.Value.Value, 5);
+        if (halfWidth is double h)
+        {
+            Assert.Equal(h, (r.Upper!.Value.Value - r.Lower!.Value.Value) / 2, 5);
+        }
+
+        Assert.Equal(x0 < 2 ? ExtrapolationStatus.BelowLowestStandard : ExtrapolationStatus.WithinRange, r.Extrapolation);
+    }
+
+    [Theory]
+    [InlineData(2.9, 0.018992, 1.381573)]
+    [InlineData(13.5, 5.590608, 6.825056)]
+    [InlineData(23.0, 10.46611, 11.82158)]
+    public void Quantify_FiellerOption_MatchesFieldReferenceLimits(double y0, double lower, double upper)
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Linear);
+
+        QuantitationResult r = SampleQuantitation.Quantify(
+            cal, UnknownSample.Create("U", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), new Injection(y0, 1)), 0.95, InverseIntervalMethod.Fieller);
+
+        // Fieller limits, m = 1: computed (field-reference §1.1/§1.2; Fieller formula FROM MEMORY).
+        Assert.Equal(lower, r.Lower!.Value.Value, 5);
+        Assert.Equal(upper, r.Upper!.Value.Value, 5);
+        Assert.Contains("Fieller interval", r.Method, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Quantify_InverseVarianceWeighting_InterpolatesTheUnknownsWeightAsTheFieldReference()
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(
+            FieldReferenceStandards.Absorbance(), CalibrationModel.Linear, Weighting.InverseVariance(FieldReferenceStandards.AbsorbanceSds));
+
+        QuantitationResult low = SampleQuantitation.Quantify(cal, UnknownSample.Create("U1", FieldReferenceStandards.Ug(1), new Injection(0.100, 1)));
+        QuantitationResult high = SampleQuantitation.Quantify(cal, UnknownSample.Create("U2", FieldReferenceStandards.Ug(1), new Injection(0.600, 1)));
+
+        // w0 from linear interpolation of s_i at x0: x0 = 6.16297, s_x0,w = 0.22795, ±0.63288 and
+        // x0 = 40.0567, s_x0,w = 1.3486, ±3.7443 (computed, field-reference §2.2).
+        Assert.Equal(6.16297, low.Concentration.Value, 5);
+        Assert.Equal(0.22795, low.StandardError!.Value.Value, 5);
+        Assert.Equal(0.63288, (low.Upper!.Value.Value - low.Lower!.Value.Value) / 2, 5);
+        Assert.Equal(40.0567, high.Concentration.Value, 4);
+        Assert.Equal(1.3486, high.StandardError!.Value.Value, 4);
+        Assert.Equal(3.7443, (high.Upper!.Value.Value - high.Lower!.Value.Value) / 2, 4);
+        Assert.Contains(low.Notes, n => n.Contains("interpolated linearly (in s)", StringComparison.Ordinal));
+    }
+
+    [Theory]
+    [InlineData(2.9, 0.62239001, 0.790674)]
+    [InlineData(13.5, 6.3224043, 0.678085)]
+    [InlineData(23.0, 11.059062, 0.659966)]
+    public void Quantify_FluorescenceQuadratic_MatchesIso84662CheckValues(double y0, double x0, double halfWidth)
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Quadratic);
+
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), new Injection(y0, 1)));
+
+        // ISO 8466-2 closed form (FROM MEMORY), values computed (field-reference §1.4), N̂ = 1.
+        Assert.Equal(x0, r.Concentration.Value, 6);
+        Assert.Equal(halfWidth, (r.Upper!.Value.Value - r.Lower!.Value.Value) / 2, 5);
+    }
+
+    [Fact]
+    public void Quantify_QuadraticNeverReachingTheResponse_IsRefusedNamingTheSample()
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Quadratic);
+
+        // The fitted parabola (c > 0, field-reference §1.4) has its minimum at x ≈ −63, y ≈ −53.7: −100 is never reached.
+        var ex = Assert.Throws<ArgumentException>(() => SampleQuantitation.Quantify(cal, UnknownSample.Create("LOWEST", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), new Injection(-100, 1))));
+
+        Assert.Equal("sample", ex.ParamName);
+        Assert.Contains("mean ratio of 'LOWEST' cannot be read off", ex.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Quantify_BetweenBlankAndLowestStandard_IsFlaggedBelowLowestStandard()
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Linear);
+
+        // x0 = 0.716 pg/mL (field-reference §1.2) lies above the blank (0) but below the lowest non-blank standard (2).
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), new Injection(2.9, 1)));
+
+        Assert.Equal(ExtrapolationStatus.BelowLowestStandard, r.Extrapolation);
+        Assert.Equal(0, cal.Standards[0].X);
+        Assert.Equal(2, cal.LowestX);
     }
 }
