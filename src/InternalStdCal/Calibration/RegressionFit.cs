@@ -143,7 +143,8 @@ public sealed class RegressionFit
             _coefficients[i] = sum;
         }
 
-        // Residuals, from predictions in the well-conditioned basis.
+        Refine(m);
+
         _fitted = new double[n];
         _residuals = new double[n];
         _weightedResiduals = new double[n];
@@ -151,8 +152,8 @@ public sealed class RegressionFit
         double rss = 0;
         for (int i = 0; i < n; i++)
         {
-            _fitted[i] = Predict(x[i]);
-            _residuals[i] = y[i] - _fitted[i];
+            _residuals[i] = CompensatedResidual(x[i], y[i]);
+            _fitted[i] = CompensatedResidual(x[i], 0) * -1;
             _weightedResiduals[i] = Math.Sqrt(_weights[i]) * _residuals[i];
             rss += _weightedResiduals[i] * _weightedResiduals[i];
             _leverages[i] = Math.Min(1.0, _weights[i] * UnscaledMeanResponseVariance(x[i]));
@@ -368,15 +369,7 @@ public sealed class RegressionFit
     public double Predict(double x)
     {
         Guard.Finite(x, nameof(x));
-        var z = new double[ParameterCount];
-        Basis(x, z);
-        double sum = 0;
-        for (int j = 0; j < z.Length; j++)
-        {
-            sum += _theta[j] * z[j];
-        }
-
-        return sum;
+        return -CompensatedResidual(x, 0);
     }
 
     /// <summary>Sensitivity dy/dx = b + 2c·x at <paramref name="x"/> (y units per x unit; ISO 8466-2's E(x)).</summary>
@@ -386,12 +379,7 @@ public sealed class RegressionFit
     public double Sensitivity(double x)
     {
         Guard.Finite(x, nameof(x));
-        return Model switch
-        {
-            CalibrationModel.Quadratic => (_theta[1] / _scale) + (2 * _theta[2] * (x - _center) / (_scale * _scale)),
-            CalibrationModel.Linear => _theta[1] / _scale,
-            _ => _theta[0] / _scale,
-        };
+        return Slope + (2 * Curvature * x);
     }
 
     /// <summary>Standard error of the fitted mean response at <paramref name="x"/>, s·√(z(x)ᵀ(XᵀWX)⁻¹z(x)) (y units).</summary>
@@ -598,6 +586,87 @@ public sealed class RegressionFit
         double d = x0 - _center;
         double root = (t * s / b) * Math.Sqrt(((1 - g) * k) + (d * d / sxx));
         return new ConfidenceInterval(_center + ((d - root) / (1 - g)), _center + ((d + root) / (1 - g)), confidenceLevel);
+    }
+
+    /// <summary>
+    /// One step of iterative refinement: residuals of the current coefficients computed with compensated
+    /// arithmetic, their least-squares correction solved with the same R (corrected semi-normal equations,
+    /// Björck, "Numerical Methods for Least Squares Problems", §2.5). Removes the rounding error that the
+    /// back-transformation from the centred basis leaves in the intercept.
+    /// </summary>
+    private void Refine(double[,] m)
+    {
+        int p = ParameterCount;
+        var z = new double[p];
+        var g = new double[p];
+        for (int i = 0; i < _x.Length; i++)
+        {
+            double r = CompensatedResidual(_x[i], _y[i]);
+            Basis(_x[i], z);
+            for (int j = 0; j < p; j++)
+            {
+                g[j] += _weights[i] * z[j] * r;
+            }
+        }
+
+        // δθ = R⁻¹·R⁻ᵀ·g.
+        var v = new double[p];
+        for (int k = 0; k < p; k++)
+        {
+            for (int j = 0; j <= k; j++)
+            {
+                v[k] += _rInverse[j, k] * g[j];
+            }
+        }
+
+        var deltaTheta = new double[p];
+        for (int i = 0; i < p; i++)
+        {
+            for (int k = i; k < p; k++)
+            {
+                deltaTheta[i] += _rInverse[i, k] * v[k];
+            }
+        }
+
+        for (int i = 0; i < p; i++)
+        {
+            double deltaBeta = 0;
+            for (int k = 0; k < p; k++)
+            {
+                deltaBeta += m[i, k] * deltaTheta[k];
+            }
+
+            double refinedTheta = _theta[i] + deltaTheta[i], refinedBeta = _coefficients[i] + deltaBeta;
+            if (!double.IsNaN(refinedTheta + refinedBeta) && !double.IsInfinity(refinedTheta + refinedBeta))
+            {
+                _theta[i] = refinedTheta;
+                _coefficients[i] = refinedBeta;
+            }
+        }
+    }
+
+    /// <summary>y − (a + b·x + c·x²) with compensated arithmetic (≈ one rounding of the result).</summary>
+    private double CompensatedResidual(double x, double y)
+    {
+        var sum = default(CompensatedSum);
+        sum.Add(y);
+        switch (Model)
+        {
+            case CalibrationModel.LinearThroughOrigin:
+                sum.AddProduct(-_coefficients[0], x);
+                break;
+            case CalibrationModel.Linear:
+                sum.Add(-_coefficients[0]);
+                sum.AddProduct(-_coefficients[1], x);
+                break;
+            default:
+                sum.Add(-_coefficients[0]);
+                sum.AddProduct(-_coefficients[1], x);
+                sum.AddProductOfSquare(-_coefficients[2], x);
+                break;
+        }
+
+        return sum.Value;
     }
 
     /// <summary>Basis functions z(x): Linear (1, u); Quadratic (1, u, u² − 1); through origin (x/s); u = (x − c)/s.</summary>

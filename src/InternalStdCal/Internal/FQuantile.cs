@@ -1,4 +1,3 @@
-using System;
 using MathNet.Numerics;
 
 namespace InternalStdCal.Internal;
@@ -6,7 +5,8 @@ namespace InternalStdCal.Internal;
 /// <summary>Quantiles of the F (Fisher–Snedecor) distribution.</summary>
 /// <remarks>
 /// The upper tail P(F &gt; f) = I_{d2/(d2 + d1·f)}(d2/2, d1/2) (regularised incomplete beta, MathNet.Numerics)
-/// is inverted by safeguarded Newton iteration started from MathNet's FisherSnedecor.InvCDF. Checked against
+/// is inverted by safeguarded Newton iteration (MathNet's FisherSnedecor.InvCDF is not used: it fails to
+/// converge for F(0.99; 1, 1)). Checked against
 /// F(0.99; 1, f) and F(0.99; 9, 9) of the field reference §1.3.
 /// </remarks>
 internal static class FQuantile
@@ -18,14 +18,12 @@ internal static class FQuantile
         Guard.InOpenRange(p, 0, 1, nameof(p));
         Guard.AtLeast(numeratorDf, 1, nameof(numeratorDf));
         Guard.AtLeast(denominatorDf, 1, nameof(denominatorDf));
-        double guess;
-        try
+        // Start from the exact value for one numerator df, F(p; 1, ν) = t((1 + p)/2, ν)², else from 1.
+        double guess = 1;
+        if (numeratorDf == 1)
         {
-            guess = MathNet.Numerics.Distributions.FisherSnedecor.InvCDF(numeratorDf, denominatorDf, p);
-        }
-        catch (ArithmeticException)
-        {
-            guess = 1;
+            double t = StudentTQuantile.TwoSided(p, denominatorDf);
+            guess = t * t;
         }
 
         return TailInversion.Solve(

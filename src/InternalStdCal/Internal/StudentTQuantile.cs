@@ -9,8 +9,10 @@ namespace InternalStdCal.Internal;
 /// <remarks>
 /// Closed forms for ν = 1 (t = tan(π(p − ½))) and ν = 2 (t = (2p − 1)/√(2p(1 − p))); otherwise the upper tail
 /// P(T &gt; t) = ½·I_{ν/(ν+t²)}(ν/2, ½) (regularised incomplete beta, MathNet.Numerics) is inverted by
-/// safeguarded Newton iteration started from MathNet's StudentT.InvCDF, whose own result is only a few
-/// digits accurate. Checked against the t table of the field reference §6.
+/// safeguarded Newton iteration started from a Cornish–Fisher approximation. MathNet's own StudentT.InvCDF
+/// is not used: it is off by up to ~1e-10 relative (e.g. 13 df, p = 0.9995). Accuracy ~1e-14 relative for
+/// moderate df, ~1e-12 for df near 10⁴ (limited by the incomplete beta). Checked against the t table of the
+/// field reference §6.
 /// </remarks>
 internal static class StudentTQuantile
 {
@@ -52,15 +54,9 @@ internal static class StudentTQuantile
                 return (1 - (2 * q)) / Math.Sqrt(2 * q * (1 - q));
         }
 
-        double guess;
-        try
-        {
-            guess = MathNet.Numerics.Distributions.StudentT.InvCDF(0, 1, df, 1 - q);
-        }
-        catch (ArithmeticException)
-        {
-            guess = 1;
-        }
+        // Start: normal quantile with the first Cornish–Fisher correction, t ≈ z + (z³ + z)/(4ν).
+        double z = MathNet.Numerics.Distributions.Normal.InvCDF(0, 1, 1 - q);
+        double guess = z + (((z * z * z) + z) / (4.0 * df));
 
         return TailInversion.Solve(
             t => UpperTail(t, df),
