@@ -1,3 +1,4 @@
+using System;
 using MathNet.Numerics;
 
 namespace InternalStdCal.Internal;

@@ -1,5 +1,6 @@
 using System;
 using InternalStdCal.Internal;
+using InternalStdCal.Tests.TestSupport;
 using Xunit;
 
 namespace InternalStdCal.Tests.Internal;
@@ -29,7 +30,7 @@ public class FQuantileTests
     [InlineData(19, "8.18495")]
     [InlineData(20, "8.09596")]
     public void Quantile_NinetyNinePercentOneNumeratorDf_MatchesTable(int denominatorDf, string printed) =>
-        StudentTQuantileTests.AssertPrinted(printed, FQuantile.Quantile(0.99, 1, denominatorDf));
+        Printed.Equal(printed, FQuantile.Quantile(0.99, 1, denominatorDf));
 
     // Computed (field-reference §1.3): F(0.99; 9, 9) = 5.35113, F(0.95; 9, 9) = 3.17889, F(0.95; 1, 4) = 7.70865.
     [Theory]
@@ -37,7 +38,7 @@ public class FQuantileTests
     [InlineData(0.95, 9, 9, "3.17889")]
     [InlineData(0.95, 1, 4, "7.70865")]
     public void Quantile_OtherTabulatedValues_MatchTable(double p, int df1, int df2, string printed) =>
-        StudentTQuantileTests.AssertPrinted(printed, FQuantile.Quantile(p, df1, df2));
+        Printed.Equal(printed, FQuantile.Quantile(p, df1, df2));
 
     // Identity F(p; 1, ν) = t((1 + p)/2, ν)² (standard result).
     [Theory]

@@ -1,6 +1,7 @@
 using System;
 using System.Globalization;
 using InternalStdCal.Internal;
+using InternalStdCal.Tests.TestSupport;
 using Xunit;
 using Xunit.Abstractions;
 
@@ -46,10 +47,10 @@ public class StudentTQuantileTests
     [MemberData(nameof(Table))]
     public void TwoSidedAndOneSided_TableDegreesOfFreedom_MatchPrintedDigits(int df, string t975, string t995, string t95, string t99)
     {
-        AssertPrinted(t975, StudentTQuantile.TwoSided(0.95, df));
-        AssertPrinted(t995, StudentTQuantile.TwoSided(0.99, df));
-        AssertPrinted(t95, StudentTQuantile.OneSided(0.95, df));
-        AssertPrinted(t99, StudentTQuantile.OneSided(0.99, df));
+        Printed.Equal(t975, StudentTQuantile.TwoSided(0.95, df));
+        Printed.Equal(t995, StudentTQuantile.TwoSided(0.99, df));
+        Printed.Equal(t95, StudentTQuantile.OneSided(0.95, df));
+        Printed.Equal(t99, StudentTQuantile.OneSided(0.99, df));
     }
 
     // Closed forms (field-reference §6): ν = 1: tan(π(p − ½)); ν = 2: (2p − 1)/√(2p(1 − p)).
@@ -91,7 +92,7 @@ public class StudentTQuantileTests
         double z = MathNet.Numerics.Distributions.Normal.InvCDF(0, 1, 0.975);
         double t = StudentTQuantile.OneSided(0.975, 1_000_000);
         Assert.InRange(t - z, 0, 1e-5);
-        AssertPrinted("1.95996398", z);
+        Printed.Equal("1.95996398", z);
     }
 
     [Fact]
@@ -118,14 +119,5 @@ public class StudentTQuantileTests
         var e = Assert.Throws<ArgumentOutOfRangeException>(() => StudentTQuantile.OneSided(0.95, 0));
         Assert.Equal("df", e.ParamName);
         Assert.Contains(">= 1", e.Message, StringComparison.Ordinal);
-    }
-
-    /// <summary>Equal to the printed value within half a unit of its last printed digit.</summary>
-    internal static void AssertPrinted(string printed, double actual)
-    {
-        double expected = double.Parse(printed, CultureInfo.InvariantCulture);
-        int decimals = printed.Length - printed.IndexOf('.', StringComparison.Ordinal) - 1;
-        double halfUnit = 0.5 * Math.Pow(10, -decimals);
-        Assert.True(Math.Abs(actual - expected) <= halfUnit * 1.0001, $"expected {printed}, got {actual:R}");
     }
 }
