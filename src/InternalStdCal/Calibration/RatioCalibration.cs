@@ -241,8 +241,8 @@ public abstract class RatioCalibration
                 {
                     InjectionResult r = s.Injections[j];
                     sb.Append("      #").Append(Text.Pad(Text.I(j + 1), 4))
-                        .Append("A = ").Append(Text.G(r.Injection.AnalyteSignal))
-                        .Append(", IS = ").Append(Text.G(r.Injection.InternalStandardSignal))
+                        .Append("A = ").Append(Text.Signal(r.Injection.AnalyteSignal))
+                        .Append(", IS = ").Append(Text.Signal(r.Injection.InternalStandardSignal))
                         .Append(", y = ").Append(Text.G(r.Response))
                         .Append(", residual ").Append(Text.G(r.Residual))
                         .Append(r.StandardizedResidual is double z ? " (std " + Text.F(z, 2) + ")" : string.Empty)
@@ -280,6 +280,8 @@ internal readonly struct CalibratorPoint
 internal static class Text
 {
     internal static string G(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+
+    internal static string Signal(double value) => value.ToString("G10", CultureInfo.InvariantCulture);
 
     internal static string F(double value, int decimals) => value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 

@@ -104,7 +104,7 @@ public sealed class QuantitationResult
             : Measured.WithStandardUncertainty(Concentration, se, null, UncertaintyEvaluation.TypeA))
         : null;
 
-    /// <summary>Readable one-paragraph report with units.</summary>
+    /// <summary>Readable report with units: the result line, the method line and any notes.</summary>
     /// <returns>The text.</returns>
     public override string ToString()
     {
@@ -126,14 +126,14 @@ public sealed class QuantitationResult
             sb.Append(", ν = ").Append(Text.G(df));
         }
 
-        sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse))
-            .Append(", ").Append(Method).Append(')');
+        sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse)).Append(')');
         sb.Append(Extrapolation switch
         {
             ExtrapolationStatus.BelowLowestStandard => " — EXTRAPOLATED below the lowest standard",
             ExtrapolationStatus.AboveHighestStandard => " — EXTRAPOLATED above the highest standard",
             _ => string.Empty,
         });
+        sb.AppendLine().Append("  method: ").Append(Method);
         foreach (string note in Notes)
         {
             sb.AppendLine().Append("  note: ").Append(note);
