@@ -1,6 +1,5 @@
 using System;
 using System.Collections.Generic;
-using System.Globalization;
 using System.Text;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -67,18 +66,21 @@ public abstract class RatioCalibration
     /// <summary>Number of points the model was fitted to (injections or level means; excluded blanks not counted).</summary>
     public int PointCount => Set.Points.Count;
 
-    /// <summary>Number of fitted non-blank levels (standards).</summary>
+    /// <summary>Number of fitted non-blank levels: distinct x values (two standards at the same x are one level).</summary>
     public int LevelCount
     {
         get
         {
-            int count = 0;
+            var levels = new HashSet<double>();
             foreach (StandardResult s in Standards)
             {
-                count += s.Included && !s.IsBlank ? 1 : 0;
+                if (s.Included && !s.IsBlank)
+                {
+                    levels.Add(s.X);
+                }
             }
 
-            return count;
+            return levels.Count;
         }
     }
 
@@ -274,20 +276,4 @@ internal readonly struct CalibratorPoint
     internal double? RelativeErrorPercent { get; }
 
     internal Concentration? BackCalculated { get; }
-}
-
-/// <summary>Number formatting for reports (invariant culture).</summary>
-internal static class Text
-{
-    internal static string G(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
-
-    internal static string Signal(double value) => value.ToString("G10", CultureInfo.InvariantCulture);
-
-    internal static string F(double value, int decimals) => value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-
-    internal static string Signed(double value, int decimals) => (value >= 0 ? "+" : string.Empty) + F(value, decimals);
-
-    internal static string I(int value) => value.ToString(CultureInfo.InvariantCulture);
-
-    internal static string Pad(string text, int width) => text.Length >= width ? text + " " : text.PadRight(width);
 }
