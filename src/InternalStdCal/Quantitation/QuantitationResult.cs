@@ -96,8 +96,9 @@ public sealed class QuantitationResult
     /// <summary>Anything a reviewer should know (extrapolation, IS concentration differing from the calibration's, …).</summary>
     public IReadOnlyList<string> Notes { get; }
 
-    /// <summary>The result as a <see cref="Measured{T}"/> (Type A, with the degrees of freedom); null when there is
-    /// no standard error.</summary>
+    /// <summary>The result as a <see cref="Measured{T}"/>: value and standard error as a Type A evaluation (JCGM
+    /// 100:2008 §4.2) with the degrees of freedom when ≥ 1.</summary>
+    /// <returns>The measured value, or null when there is no standard error (single response factor).</returns>
     public Measured<Concentration>? AsMeasured() => StandardError is Concentration se
         ? (DegreesOfFreedom is double df && df >= 1
             ? Measured.TypeA(Concentration, se, df)
