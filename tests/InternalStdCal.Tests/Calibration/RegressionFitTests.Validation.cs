@@ -198,5 +198,7 @@ public partial class RegressionFitTests
         Assert.Equal(0.0, fit.X[0]);
         Assert.Equal(2.1, fit.Y[0]);
         Printed.Equal("1.930357143", fit.Slope);
+        Assert.False(fit.Coefficients is double[]);
+        Assert.False(fit.Residuals is double[]);
     }
 }
