@@ -52,9 +52,10 @@ internal static class AcceptanceEvaluator
         {
             if (anyPointLimit)
             {
-                var byLevel = outcomes.GroupBy(o => o.Level).ToList();
-                var passingLevels = byLevel.Where(g => g.Count(o => o.Passed) >= rules.LevelPassingFraction * g.Count()).Select(g => g.Key).ToList();
-                var failingLevels = byLevel.Select(g => g.Key).Except(passingLevels).ToList();
+                // A level is a distinct x; its calibrators may come from several standards.
+                var byLevel = outcomes.Zip(points, (o, p) => (o, p.Level.X)).GroupBy(t => t.X).ToList();
+                var passingLevels = byLevel.Where(g => g.Count(t => t.o.Passed) >= rules.LevelPassingFraction * g.Count()).ToList();
+                var failingLevels = byLevel.Except(passingLevels).Select(g => string.Join("/", g.Select(t => t.o.Level).Distinct())).ToList();
                 criteria.Add(Judge("MinPassingLevels", passingLevels.Count >= minPassing, passingLevels.Count, minPassing,
                     Text.I(passingLevels.Count) + " levels passing (≥ " + Text.F(100 * rules.LevelPassingFraction, 0) + " % of their calibrators within limits), required ≥ " + Text.I(minPassing)
                     + (failingLevels.Count == 0 ? string.Empty : "; failing levels: " + string.Join(", ", failingLevels))));

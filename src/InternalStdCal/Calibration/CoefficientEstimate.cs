@@ -32,9 +32,10 @@ public sealed class CoefficientEstimate
     /// (x unit)⁻² for the curvature; "1" throughout on the ratio axis.</summary>
     public string Unit { get; }
 
-    /// <summary>Prints "b (slope) = 0.199708 (SE 0.0013, 95 % CI [0.1955, 0.2039]) (µg/L)⁻¹".</summary>
+    /// <summary>Prints "b (slope) = 0.199708 (µg/L)⁻¹ (SE 0.0013, 95 % CI [0.1955, 0.2039])"; a dimensionless
+    /// coefficient is printed without a unit.</summary>
     /// <returns>The text.</returns>
     public override string ToString() =>
-        Symbol + " (" + Meaning + ") = " + Text.G(Value) + " " + Unit + " (SE " + Text.G(StandardError) + ", "
+        Symbol + " (" + Meaning + ") = " + Text.G(Value) + (Unit == "1" ? string.Empty : " " + Unit) + " (SE " + Text.G(StandardError) + ", "
         + Text.F(100 * Interval.ConfidenceLevel, 0) + " % CI [" + Text.G(Interval.Lower) + ", " + Text.G(Interval.Upper) + "])";
 }

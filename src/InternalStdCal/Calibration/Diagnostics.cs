@@ -235,7 +235,11 @@ public sealed class VarianceHomogeneityTest
         "variance homogeneity (ISO 8466-1): s² = " + Text.G(VarianceLowest) + " at '" + LowestLevel + "' (n = " + Text.I(ReplicatesLowest) + "), "
         + Text.G(VarianceHighest) + " at '" + HighestLevel + "' (n = " + Text.I(ReplicatesHighest) + "); PG = " + Text.G(Test.Statistic)
         + " vs F(" + Text.G(1 - Test.SignificanceLevel) + "; " + Text.I(Test.NumeratorDegreesOfFreedom) + ", " + Text.I(Test.DenominatorDegreesOfFreedom) + ") = "
-        + Text.G(Test.CriticalValue) + " → " + (IsHeteroscedastic ? "variances differ: consider a weighted fit" : "variances homogeneous: an unweighted fit is justified");
+        + Text.G(Test.CriticalValue) + " → " + (IsHeteroscedastic
+            ? "variances differ: consider a weighted fit"
+            : "no significant difference" + (Math.Min(ReplicatesLowest, ReplicatesHighest) < 10
+                ? " (with " + Text.I(Math.Min(ReplicatesLowest, ReplicatesHighest)) + " replicates the test has little power; ISO 8466-1 asks for 10 at each end)"
+                : ": an unweighted fit is justified"));
 
     internal static VarianceHomogeneityTest? Compute(StandardSet set, double alpha, List<string> notes)
     {

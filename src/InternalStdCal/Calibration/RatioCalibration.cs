@@ -1,6 +1,5 @@
 using System;
 using System.Collections.Generic;
-using System.Globalization;
 using System.Text;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -67,18 +66,21 @@ public abstract class RatioCalibration
     /// <summary>Number of points the model was fitted to (injections or level means; excluded blanks not counted).</summary>
     public int PointCount => Set.Points.Count;
 
-    /// <summary>Number of fitted non-blank levels (standards).</summary>
+    /// <summary>Number of fitted non-blank levels: distinct x values (two standards at the same x are one level).</summary>
     public int LevelCount
     {
         get
         {
-            int count = 0;
+            var levels = new HashSet<double>();
             foreach (StandardResult s in Standards)
             {
-                count += s.Included && !s.IsBlank ? 1 : 0;
+                if (s.Included && !s.IsBlank)
+                {
+                    levels.Add(s.X);
+                }
             }
 
-            return count;
+            return levels.Count;
         }
     }
 
@@ -241,8 +243,8 @@ public abstract class RatioCalibration
                 {
                     InjectionResult r = s.Injections[j];
                     sb.Append("      #").Append(Text.Pad(Text.I(j + 1), 4))
-                        .Append("A = ").Append(Text.G(r.Injection.AnalyteSignal))
-                        .Append(", IS = ").Append(Text.G(r.Injection.InternalStandardSignal))
+                        .Append("A = ").Append(Text.Signal(r.Injection.AnalyteSignal))
+                        .Append(", IS = ").Append(Text.Signal(r.Injection.InternalStandardSignal))
                         .Append(", y = ").Append(Text.G(r.Response))
                         .Append(", residual ").Append(Text.G(r.Residual))
                         .Append(r.StandardizedResidual is double z ? " (std " + Text.F(z, 2) + ")" : string.Empty)
@@ -274,18 +276,4 @@ internal readonly struct CalibratorPoint
     internal double? RelativeErrorPercent { get; }
 
     internal Concentration? BackCalculated { get; }
-}
-
-/// <summary>Number formatting for reports (invariant culture).</summary>
-internal static class Text
-{
-    internal static string G(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
-
-    internal static string F(double value, int decimals) => value.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-
-    internal static string Signed(double value, int decimals) => (value >= 0 ? "+" : string.Empty) + F(value, decimals);
-
-    internal static string I(int value) => value.ToString(CultureInfo.InvariantCulture);
-
-    internal static string Pad(string text, int width) => text.Length >= width ? text + " " : text.PadRight(width);
 }

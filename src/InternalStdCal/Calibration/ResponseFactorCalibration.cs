@@ -59,7 +59,7 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// <returns>The calibration; <see cref="RatioModel.SinglePointResponseFactor"/> when only one standard is fitted.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="standards"/> or an element is null.</exception>
     /// <exception cref="ArgumentException">No standards; duplicate labels; mixed concentration kinds; IS concentration
-    /// not constant on the concentration axis; a blank is included; or the mean RF is 0.</exception>
+    /// not constant on the concentration axis; a blank is included; or the mean RF is ≤ 0.</exception>
     public static ResponseFactorCalibration Fit(IReadOnlyList<CalibrationStandard> standards, CalibrationOptions? options = null)
     {
         StandardSet set = StandardSet.Create(standards, options);
@@ -82,9 +82,9 @@ public sealed class ResponseFactorCalibration : RatioCalibration
         }
 
         double mean = Mean(rf);
-        if (mean == 0)
+        if (!(mean > 0))
         {
-            throw new ArgumentException("Parameter 'standards': the mean response factor is 0 (no analyte signal), so no concentration can be calculated from it.", nameof(standards));
+            throw new ArgumentException($"Parameter 'standards': the mean response factor is {Text.G(mean)}; it must be > 0 (the analyte signals of the standards are zero or negative on average).", nameof(standards));
         }
 
         double? sd = rf.Length > 1 ? StandardDeviation(rf, mean) : null;
@@ -114,7 +114,7 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// <param name="options">Options; null for the defaults.</param>
     /// <returns>The calibration (<see cref="RatioModel.SinglePointResponseFactor"/>).</returns>
     /// <exception cref="ArgumentNullException"><paramref name="standard"/> is null.</exception>
-    /// <exception cref="ArgumentException">The standard is a blank or its RF is 0.</exception>
+    /// <exception cref="ArgumentException">The standard is a blank or its RF is ≤ 0.</exception>
     public static ResponseFactorCalibration FitSinglePoint(CalibrationStandard standard, CalibrationOptions? options = null) =>
         Fit(new[] { Guard.NotNull(standard, nameof(standard)) }, options);
 

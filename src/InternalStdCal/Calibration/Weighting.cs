@@ -26,6 +26,7 @@ public sealed class Weighting : IEquatable<Weighting>
     {
         Scheme = scheme;
         _values = values;
+        PointValues = Array.AsReadOnly(values);
     }
 
     /// <summary>Unit weights (ordinary least squares).</summary>
@@ -57,7 +58,7 @@ public sealed class Weighting : IEquatable<Weighting>
     /// Per-point values as given: the standard deviations for <see cref="WeightingScheme.InverseVariance"/>, the
     /// weights for <see cref="WeightingScheme.Custom"/>; empty for the other schemes.
     /// </summary>
-    public IReadOnlyList<double> PointValues => _values;
+    public IReadOnlyList<double> PointValues { get; }
 
     /// <summary>Short name of the scheme: "none", "1/x", "1/x²", "1/y", "1/y²", "1/s²" or "custom".</summary>
     public string Name => Scheme switch

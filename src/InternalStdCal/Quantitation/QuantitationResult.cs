@@ -96,15 +96,16 @@ public sealed class QuantitationResult
     /// <summary>Anything a reviewer should know (extrapolation, IS concentration differing from the calibration's, …).</summary>
     public IReadOnlyList<string> Notes { get; }
 
-    /// <summary>The result as a <see cref="Measured{T}"/> (Type A, with the degrees of freedom); null when there is
-    /// no standard error.</summary>
+    /// <summary>The result as a <see cref="Measured{T}"/>: value and standard error as a Type A evaluation (JCGM
+    /// 100:2008 §4.2) with the degrees of freedom when ≥ 1.</summary>
+    /// <returns>The measured value, or null when there is no standard error (single response factor).</returns>
     public Measured<Concentration>? AsMeasured() => StandardError is Concentration se
         ? (DegreesOfFreedom is double df && df >= 1
             ? Measured.TypeA(Concentration, se, df)
             : Measured.WithStandardUncertainty(Concentration, se, null, UncertaintyEvaluation.TypeA))
         : null;
 
-    /// <summary>Readable one-paragraph report with units.</summary>
+    /// <summary>Readable report with units: the result line, the method line and any notes.</summary>
     /// <returns>The text.</returns>
     public override string ToString()
     {
@@ -126,14 +127,14 @@ public sealed class QuantitationResult
             sb.Append(", ν = ").Append(Text.G(df));
         }
 
-        sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse))
-            .Append(", ").Append(Method).Append(')');
+        sb.Append(" (m = ").Append(Text.I(Replicates)).Append(", mean ratio ").Append(Text.G(MeanResponse)).Append(')');
         sb.Append(Extrapolation switch
         {
             ExtrapolationStatus.BelowLowestStandard => " — EXTRAPOLATED below the lowest standard",
             ExtrapolationStatus.AboveHighestStandard => " — EXTRAPOLATED above the highest standard",
             _ => string.Empty,
         });
+        sb.AppendLine().Append("  method: ").Append(Method);
         foreach (string note in Notes)
         {
             sb.AppendLine().Append("  note: ").Append(note);

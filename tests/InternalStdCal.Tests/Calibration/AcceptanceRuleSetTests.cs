@@ -137,6 +137,24 @@ public class AcceptanceRuleSetTests
     }
 
     [Fact]
+    public void Evaluate_TwoStandardsAtOneConcentration_CountAsOneLevel()
+    {
+        // A level is a concentration (ICH M10 "concentration levels", field-reference §4.2): a repeat standard adds no level.
+        List<CalibrationStandard> three = RfStandards(1.0, 1.0, 1.0);
+        var four = new List<CalibrationStandard>(three)
+        {
+            new("S3 (repeat)", three[2].AnalyteConcentration, three[2].InternalStandardConcentration, three[2].Injections),
+        };
+        var rules = new AcceptanceRuleSet("Four levels", "invented for this test") { MinLevels = 4 };
+
+        AcceptanceVerdict verdict = rules.Evaluate(ResponseFactorCalibration.Fit(four));
+
+        Assert.Equal(3, ResponseFactorCalibration.Fit(four).LevelCount);
+        Assert.False(verdict.Accepted);
+        Assert.Equal(3, verdict.Criteria.Single().Observed);
+    }
+
+    [Fact]
     public void Constructor_BadArguments_AreRefusedWithNameAndRange()
     {
         var ex1 = Assert.Throws<ArgumentException>(() => new AcceptanceRuleSet(" ", "x"));

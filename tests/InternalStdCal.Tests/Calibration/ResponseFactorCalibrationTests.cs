@@ -149,4 +149,18 @@ public class ResponseFactorCalibrationTests
         Assert.Contains("µg/L", text, StringComparison.Ordinal);
         Assert.Contains("CAL-5", text, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Fit_NegativeMeanResponseFactor_IsRefused()
+    {
+        var standards = new[]
+        {
+            CalibrationStandard.Create("N1", FieldReferenceStandards.Ug(1), FieldReferenceStandards.Ug(5), new Injection(-100, 50000)),
+            CalibrationStandard.Create("N2", FieldReferenceStandards.Ug(2), FieldReferenceStandards.Ug(5), new Injection(-150, 50000)),
+        };
+
+        var ex = Assert.Throws<ArgumentException>(() => ResponseFactorCalibration.Fit(standards));
+
+        Assert.Contains("the mean response factor is -0.00875; it must be > 0", ex.Message, StringComparison.Ordinal);
+    }
 }
