@@ -94,12 +94,7 @@ public static class Measured
     public static Measured<T> FromTolerance<T>(T value, T halfWidth, ToleranceDistribution distribution)
         where T : struct, IQuantity<T>
     {
-        (double divisor, UncertaintyEvaluation evaluation) = distribution switch
-        {
-            ToleranceDistribution.Rectangular => (Math.Sqrt(3), UncertaintyEvaluation.TypeBRectangular),
-            ToleranceDistribution.Triangular => (Math.Sqrt(6), UncertaintyEvaluation.TypeBTriangular),
-            _ => throw new ArgumentOutOfRangeException(nameof(distribution), distribution, $"Parameter 'distribution' was {distribution}; it must be Rectangular or Triangular."),
-        };
+        (double divisor, UncertaintyEvaluation evaluation) = Tolerances.Divisor(distribution, nameof(distribution));
         RequireNonNegative(halfWidth, value, nameof(halfWidth));
         return new(value, halfWidth.Scale(1 / divisor), null, evaluation);
     }
