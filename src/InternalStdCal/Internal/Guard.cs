@@ -119,6 +119,30 @@ internal static class Guard
         }
     }
 
+    /// <summary>A quantity whose number is &gt; 0 (quantities are finite by construction).</summary>
+    internal static T PositiveQuantity<T>(T value, string paramName, string what)
+        where T : struct, InternalStdCal.Quantities.IQuantity<T>
+    {
+        if (!(value.Value > 0))
+        {
+            throw new ArgumentOutOfRangeException(paramName, value.Value, $"Parameter '{paramName}' was {value}; it must be {what} > 0.");
+        }
+
+        return value;
+    }
+
+    /// <summary>Not null, not empty, not only white space.</summary>
+    internal static string NotBlank(string? value, string paramName)
+    {
+        NotNull(value, paramName);
+        if (value!.Trim().Length == 0)
+        {
+            throw new ArgumentException($"Parameter '{paramName}' was '{value}'; it must contain at least one non-blank character.", paramName);
+        }
+
+        return value;
+    }
+
     internal static ArgumentOutOfRangeException OutOfRange(string paramName, double value, string allowed) =>
         new(paramName, value, $"Parameter '{paramName}' was {Format(value)}; it must be {allowed}.");
 

@@ -13,4 +13,20 @@ internal static class PowerOfTen
     /// <summary>value · 10^exponent, multiplying or dividing by an exact power so only one rounding occurs.</summary>
     internal static double Scale(double value, int exponent) =>
         exponent >= 0 ? value * Exact[exponent] : value / Exact[-exponent];
+
+    /// <summary>Like <see cref="Scale"/>, but a result that overflows to ±∞ throws instead of being returned.</summary>
+    /// <exception cref="System.ArgumentOutOfRangeException">value · 10^exponent is outside the range of a double.</exception>
+    internal static double ScaleChecked(double value, int exponent, string fromSymbol, string toSymbol, string paramName)
+    {
+        double result = Scale(value, exponent);
+        if (double.IsInfinity(result))
+        {
+            throw new System.ArgumentOutOfRangeException(
+                paramName,
+                value,
+                $"Parameter '{paramName}' was {Guard.Format(value)} {fromSymbol}; expressed in {toSymbol} it overflows the range of a double (it must be at most {Guard.Format(Scale(double.MaxValue, -exponent))} {fromSymbol} in magnitude).");
+        }
+
+        return result;
+    }
 }

@@ -44,11 +44,14 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <param name="value">The number; any finite value (negative estimates are allowed).</param>
     /// <param name="unit">A defined <see cref="ConcentrationUnit"/>.</param>
     /// <returns>The concentration.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is NaN or ±∞, or <paramref name="unit"/> is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is NaN or ±∞ (or so large that its value in
+    /// the base unit of the kind overflows), or <paramref name="unit"/> is not defined.</exception>
     public static Concentration From(double value, ConcentrationUnit unit)
     {
-        UnitTable.Of(unit);
-        return new Concentration(Guard.Finite(value, nameof(value)), unit);
+        UnitTable.Entry entry = UnitTable.Of(unit);
+        Guard.Finite(value, nameof(value));
+        PowerOfTen.ScaleChecked(value, entry.Exponent, entry.Symbol, BaseSymbol(entry.Kind), nameof(value));
+        return new Concentration(value, unit);
     }
 
     /// <summary>Creates a mass concentration in mg/L.</summary>
@@ -109,33 +112,39 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <param name="unit">A unit of the same kind.</param>
     /// <returns>The value in <paramref name="unit"/>.</returns>
     /// <exception cref="ArgumentException"><paramref name="unit"/> is of another kind.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when
+    /// expressed in it.</exception>
     public double In(ConcentrationUnit unit)
     {
         UnitTable.Entry target = UnitTable.Of(unit);
         UnitTable.Entry source = UnitTable.Of(Unit);
         if (target.Kind != source.Kind)
         {
-            throw KindMismatch(nameof(unit), target.Kind, "Use ConvertTo with a MolarMass or a Density to change kind.");
+            throw KindMismatch(nameof(unit), UnitDescription(unit), "Use ConvertTo with a MolarMass or a Density to change kind.");
         }
 
-        return PowerOfTen.Scale(Value, source.Exponent - target.Exponent);
+        return PowerOfTen.ScaleChecked(Value, source.Exponent - target.Exponent, source.Symbol, target.Symbol, nameof(unit));
     }
 
     /// <summary>The same concentration expressed in another unit of the same kind.</summary>
     /// <param name="unit">A unit of the same kind.</param>
     /// <returns>The converted concentration.</returns>
     /// <exception cref="ArgumentException"><paramref name="unit"/> is of another kind.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when
+    /// expressed in it.</exception>
     public Concentration ConvertTo(ConcentrationUnit unit) => new(In(unit), unit);
 
     /// <summary>Converts between mass and amount concentration with the analyte's molar mass
     /// (γ = c·M, ISO 80000-9).</summary>
     /// <param name="unit">The target unit: an amount unit if this is a mass concentration, or the reverse; a unit of
     /// the same kind is converted directly.</param>
-    /// <param name="molarMass">The molar mass of the analyte.</param>
+    /// <param name="molarMass">The molar mass of the analyte (not <c>default</c>).</param>
     /// <returns>The converted concentration.</returns>
     /// <exception cref="ArgumentException">The conversion would involve a mass fraction, which needs a density.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="molarMass"/> is <c>default</c> (0 g/mol).</exception>
     public Concentration ConvertTo(ConcentrationUnit unit, MolarMass molarMass)
     {
+        Guard.Positive(molarMass.GramsPerMole, nameof(molarMass));
         ConcentrationKind from = Kind;
         ConcentrationKind to = KindOf(unit);
         if (from == to)
@@ -153,17 +162,19 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
             return From(BaseValue * molarMass.GramsPerMole, ConcentrationUnit.GramPerLitre).ConvertTo(unit);
         }
 
-        throw KindMismatch(nameof(unit), to, "A molar mass links mass and amount concentration only; mass fractions need a Density.");
+        throw KindMismatch(nameof(unit), UnitDescription(unit), "A molar mass links mass and amount concentration only; mass fractions need a Density.");
     }
 
     /// <summary>Converts between mass fraction and mass concentration with the density of the solution
     /// (γ = w·ρ).</summary>
     /// <param name="unit">The target unit: a mass-concentration unit if this is a mass fraction, or the reverse.</param>
-    /// <param name="density">The density of the solution or sample.</param>
+    /// <param name="density">The density of the solution or sample (not <c>default</c>).</param>
     /// <returns>The converted concentration.</returns>
     /// <exception cref="ArgumentException">The conversion involves an amount concentration.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="density"/> is <c>default</c> (0 g/mL).</exception>
     public Concentration ConvertTo(ConcentrationUnit unit, Density density)
     {
+        Guard.Positive(density.GramsPerMillilitre, nameof(density));
         ConcentrationKind from = Kind;
         ConcentrationKind to = KindOf(unit);
         if (from == to)
@@ -182,7 +193,7 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
             return From(BaseValue / density.KilogramsPerLitre, ConcentrationUnit.GramPerKilogram).ConvertTo(unit);
         }
 
-        throw KindMismatch(nameof(unit), to, "A density links mass fraction and mass concentration only; amount concentrations need a MolarMass.");
+        throw KindMismatch(nameof(unit), UnitDescription(unit), "A density links mass fraction and mass concentration only; amount concentrations need a MolarMass.");
     }
 
     /// <inheritdoc />
@@ -227,7 +238,8 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <param name="text">The text. "ppm"/"ppb" are refused here; use <see cref="Parse(string, ConcentrationKind)"/>.</param>
     /// <returns>The concentration.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="text"/> is null.</exception>
-    /// <exception cref="FormatException">The text is not a finite number followed by a known unit symbol.</exception>
+    /// <exception cref="FormatException">The text is not a finite number followed by a known unit symbol, or the number
+    /// overflows in the base unit of the kind.</exception>
     public static Concentration Parse(string text)
     {
         UnitTable.SplitValueAndUnit(text, nameof(text), out double value, out string symbol);
@@ -236,7 +248,7 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
             throw new FormatException($"'{text}' uses '{symbol}', which is ambiguous (mass concentration or mass fraction); call Parse(text, kind) to say which is meant.");
         }
 
-        return new Concentration(value, ParseUnit(symbol, text));
+        return Create(value, ParseUnit(symbol, text), text);
     }
 
     /// <summary>Parses "&lt;number&gt; &lt;unit&gt;", accepting "ppm"/"ppb" as the given kind.</summary>
@@ -245,7 +257,8 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <returns>The concentration.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="text"/> is null.</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="partsPerKind"/> is amount concentration.</exception>
-    /// <exception cref="FormatException">The text is not a finite number followed by a known unit symbol.</exception>
+    /// <exception cref="FormatException">The text is not a finite number followed by a known unit symbol, or the number
+    /// overflows in the base unit of the kind.</exception>
     public static Concentration Parse(string text, ConcentrationKind partsPerKind)
     {
         UnitTable.SplitValueAndUnit(text, nameof(text), out double value, out string symbol);
@@ -253,7 +266,7 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
         {
             "ppm" => FromPartsPerMillion(value, partsPerKind),
             "ppb" => FromPartsPerBillion(value, partsPerKind),
-            _ => new Concentration(value, ParseUnit(symbol, text)),
+            _ => Create(value, ParseUnit(symbol, text), text),
         };
     }
 
@@ -361,12 +374,32 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     {
         if (Kind != other.Kind)
         {
-            throw KindMismatch(paramName, other.Kind, string.Empty);
+            throw KindMismatch(paramName, $"{other} ({other.Kind})", string.Empty);
         }
     }
 
-    private ArgumentException KindMismatch(string paramName, ConcentrationKind other, string hint) =>
-        new($"Parameter '{paramName}' is a {other} but this concentration is a {Kind} ({ToString()}); the kinds must match. {hint}".TrimEnd(), paramName);
+    private ArgumentException KindMismatch(string paramName, string offending, string hint) =>
+        new($"Parameter '{paramName}' was {offending} but this concentration is {ToString()} ({Kind}); the kinds must match. {hint}".TrimEnd(), paramName);
+
+    private static string UnitDescription(ConcentrationUnit unit) => $"{SymbolOf(unit)} ({KindOf(unit)})";
+
+    private static string BaseSymbol(ConcentrationKind kind) => kind switch
+    {
+        ConcentrationKind.MassConcentration => "g/L",
+        ConcentrationKind.AmountConcentration => "mol/L",
+        _ => "g/kg",
+    };
+
+    private static Concentration Create(double value, ConcentrationUnit unit, string text)
+    {
+        UnitTable.Entry entry = UnitTable.Of(unit);
+        if (double.IsInfinity(PowerOfTen.Scale(value, entry.Exponent)))
+        {
+            throw new FormatException($"'{text}' is out of range: expressed in {BaseSymbol(entry.Kind)} it overflows the range of a double.");
+        }
+
+        return new Concentration(value, unit);
+    }
 
     private static ConcentrationUnit PartsPerUnit(ConcentrationKind kind, ConcentrationUnit massConcentration, ConcentrationUnit massFraction, string paramName) => kind switch
     {

@@ -53,7 +53,6 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
     /// <summary>The mass in µg.</summary>
     public double Micrograms => In(MassUnit.Microgram);
 
-
     /// <summary>Creates a mass.</summary>
     /// <param name="value">The number; finite and ≥ 0.</param>
     /// <param name="unit">A defined unit.</param>
@@ -61,8 +60,10 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is negative, NaN or ±∞, or <paramref name="unit"/> is not defined.</exception>
     public static Mass From(double value, MassUnit unit)
     {
-        UnitTable.Exponent(unit);
-        return new Mass(Guard.NonNegative(value, nameof(value)), unit);
+        int exponent = UnitTable.Exponent(unit);
+        Guard.NonNegative(value, nameof(value));
+        PowerOfTen.ScaleChecked(value, exponent, UnitTable.Symbol(unit), "g", nameof(value));
+        return new Mass(value, unit);
     }
 
     /// <summary>Creates a mass in kg.</summary>
@@ -89,17 +90,17 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is negative, NaN or ±∞.</exception>
     public static Mass FromMicrograms(double value) => From(value, MassUnit.Microgram);
 
-
     /// <summary>The number expressed in another unit (exact power-of-ten factor, one rounding).</summary>
     /// <param name="unit">A defined unit.</param>
     /// <returns>The value in <paramref name="unit"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined.</exception>
-    public double In(MassUnit unit) => PowerOfTen.Scale(Value, UnitTable.Exponent(Unit) - UnitTable.Exponent(unit));
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when expressed in it.</exception>
+    public double In(MassUnit unit) =>
+        PowerOfTen.ScaleChecked(Value, UnitTable.Exponent(Unit) - UnitTable.Exponent(unit), UnitTable.Symbol(Unit), UnitTable.Symbol(unit), nameof(unit));
 
     /// <summary>The same mass expressed in another unit.</summary>
     /// <param name="unit">A defined unit.</param>
     /// <returns>The converted mass.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when expressed in it.</exception>
     public Mass ConvertTo(MassUnit unit) => new(In(unit), unit);
 
     /// <inheritdoc />
@@ -116,14 +117,18 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
         return Value / denominator.In(Unit);
     }
 
-    /// <inheritdoc />
-    public Mass Scale(double factor) => From(Value * Guard.Finite(factor, nameof(factor)), Unit);
+    /// <summary>The mass multiplied by a non-negative factor, in the same unit.</summary>
+    /// <param name="factor">Finite and ≥ 0 (a mass cannot be negative).</param>
+    /// <returns>The scaled mass.</returns>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="factor"/> is negative, NaN or ±∞, or the product overflows.</exception>
+    public Mass Scale(double factor) => From(Value * Guard.NonNegative(factor, nameof(factor)), Unit);
 
     /// <summary>Parses the printed form "&lt;number&gt; &lt;unit&gt;" (invariant culture), e.g. "100.28 mg".</summary>
     /// <param name="text">The text; the micro prefix may be written µ, μ or u.</param>
     /// <returns>The mass.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="text"/> is null.</exception>
-    /// <exception cref="FormatException">The text is not a finite non-negative number followed by kg, g, mg, µg.</exception>
+    /// <exception cref="FormatException">The text is not a finite non-negative number followed by kg, g, mg, µg, or it
+    /// overflows when expressed in g.</exception>
     public static Mass Parse(string text)
     {
         UnitTable.SplitValueAndUnit(text, nameof(text), out double value, out string symbol);
@@ -135,6 +140,11 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
         if (value < 0)
         {
             throw new FormatException($"'{text}' is negative; a mass must be >= 0.");
+        }
+
+        if (double.IsInfinity(PowerOfTen.Scale(value, UnitTable.Exponent(unit))))
+        {
+            throw new FormatException($"'{text}' is out of range: expressed in g it overflows the range of a double.");
         }
 
         return new Mass(value, unit);

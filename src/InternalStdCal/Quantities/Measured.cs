@@ -70,10 +70,18 @@ public static class Measured
     /// <param name="evaluation">How u was obtained.</param>
     /// <returns>The measured value.</returns>
     /// <exception cref="ArgumentException">The uncertainty is negative or of another kind.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="degreesOfFreedom"/> &lt; 1 or NaN.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="degreesOfFreedom"/> &lt; 1, NaN or ∞, or
+    /// <paramref name="evaluation"/> is not defined.</exception>
     public static Measured<T> WithStandardUncertainty<T>(T value, T standardUncertainty, double? degreesOfFreedom = null, UncertaintyEvaluation evaluation = UncertaintyEvaluation.TypeBStandard)
-        where T : struct, IQuantity<T> =>
-        new(value, standardUncertainty, degreesOfFreedom is null ? null : RequireDegreesOfFreedom(degreesOfFreedom.Value), evaluation);
+        where T : struct, IQuantity<T>
+    {
+        if (evaluation < UncertaintyEvaluation.Exact || evaluation > UncertaintyEvaluation.Combined)
+        {
+            throw new ArgumentOutOfRangeException(nameof(evaluation), evaluation, $"Parameter 'evaluation' was {(int)evaluation}; it must be a defined UncertaintyEvaluation ({(int)UncertaintyEvaluation.Exact} to {(int)UncertaintyEvaluation.Combined}).");
+        }
+
+        return new(value, standardUncertainty, degreesOfFreedom is null ? null : RequireDegreesOfFreedom(degreesOfFreedom.Value), evaluation);
+    }
 
     /// <summary>Type B from a ± tolerance (e.g. a class A glassware tolerance): u = a/√3 or a/√6 (JCGM 100:2008 §4.3.7, §4.3.9).</summary>
     /// <typeparam name="T">The quantity type.</typeparam>
@@ -86,12 +94,7 @@ public static class Measured
     public static Measured<T> FromTolerance<T>(T value, T halfWidth, ToleranceDistribution distribution)
         where T : struct, IQuantity<T>
     {
-        (double divisor, UncertaintyEvaluation evaluation) = distribution switch
-        {
-            ToleranceDistribution.Rectangular => (Math.Sqrt(3), UncertaintyEvaluation.TypeBRectangular),
-            ToleranceDistribution.Triangular => (Math.Sqrt(6), UncertaintyEvaluation.TypeBTriangular),
-            _ => throw new ArgumentOutOfRangeException(nameof(distribution), distribution, $"Parameter 'distribution' was {distribution}; it must be Rectangular or Triangular."),
-        };
+        (double divisor, UncertaintyEvaluation evaluation) = Tolerances.Divisor(distribution, nameof(distribution));
         RequireNonNegative(halfWidth, value, nameof(halfWidth));
         return new(value, halfWidth.Scale(1 / divisor), null, evaluation);
     }
@@ -120,7 +123,7 @@ public static class Measured
         {
             converted = uncertainty.InUnitOf(value);
         }
-        catch (ArgumentException ex)
+        catch (ArgumentException ex) when (ex is not ArgumentOutOfRangeException)
         {
             throw new ArgumentException($"Parameter '{paramName}' ({uncertainty}) must be of the same kind as the value ({value}).", paramName, ex);
         }

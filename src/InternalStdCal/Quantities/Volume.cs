@@ -47,7 +47,6 @@ public readonly struct Volume : IQuantity<Volume>, IComparable
     /// <summary>The volume in µL.</summary>
     public double Microlitres => In(VolumeUnit.Microlitre);
 
-
     /// <summary>Creates a volume.</summary>
     /// <param name="value">The number; finite and ≥ 0.</param>
     /// <param name="unit">A defined unit.</param>
@@ -55,8 +54,10 @@ public readonly struct Volume : IQuantity<Volume>, IComparable
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is negative, NaN or ±∞, or <paramref name="unit"/> is not defined.</exception>
     public static Volume From(double value, VolumeUnit unit)
     {
-        UnitTable.Exponent(unit);
-        return new Volume(Guard.NonNegative(value, nameof(value)), unit);
+        int exponent = UnitTable.Exponent(unit);
+        Guard.NonNegative(value, nameof(value));
+        PowerOfTen.ScaleChecked(value, exponent, UnitTable.Symbol(unit), "L", nameof(value));
+        return new Volume(value, unit);
     }
 
     /// <summary>Creates a volume in L.</summary>
@@ -77,17 +78,17 @@ public readonly struct Volume : IQuantity<Volume>, IComparable
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is negative, NaN or ±∞.</exception>
     public static Volume FromMicrolitres(double value) => From(value, VolumeUnit.Microlitre);
 
-
     /// <summary>The number expressed in another unit (exact power-of-ten factor, one rounding).</summary>
     /// <param name="unit">A defined unit.</param>
     /// <returns>The value in <paramref name="unit"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined.</exception>
-    public double In(VolumeUnit unit) => PowerOfTen.Scale(Value, UnitTable.Exponent(Unit) - UnitTable.Exponent(unit));
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when expressed in it.</exception>
+    public double In(VolumeUnit unit) =>
+        PowerOfTen.ScaleChecked(Value, UnitTable.Exponent(Unit) - UnitTable.Exponent(unit), UnitTable.Symbol(Unit), UnitTable.Symbol(unit), nameof(unit));
 
     /// <summary>The same volume expressed in another unit.</summary>
     /// <param name="unit">A defined unit.</param>
     /// <returns>The converted volume.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="unit"/> is not defined, or the value overflows when expressed in it.</exception>
     public Volume ConvertTo(VolumeUnit unit) => new(In(unit), unit);
 
     /// <inheritdoc />
@@ -104,8 +105,11 @@ public readonly struct Volume : IQuantity<Volume>, IComparable
         return Value / denominator.In(Unit);
     }
 
-    /// <inheritdoc />
-    public Volume Scale(double factor) => From(Value * Guard.Finite(factor, nameof(factor)), Unit);
+    /// <summary>The volume multiplied by a non-negative factor, in the same unit.</summary>
+    /// <param name="factor">Finite and ≥ 0 (a volume cannot be negative).</param>
+    /// <returns>The scaled volume.</returns>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="factor"/> is negative, NaN or ±∞, or the product overflows.</exception>
+    public Volume Scale(double factor) => From(Value * Guard.NonNegative(factor, nameof(factor)), Unit);
 
     /// <summary>Parses the printed form "&lt;number&gt; &lt;unit&gt;" (invariant culture), e.g. "100 µL".</summary>
     /// <param name="text">The text; the micro prefix may be written µ, μ or u.</param>
