@@ -309,7 +309,7 @@ public sealed class RegressionCalibration : RatioCalibration
                     pointIndex.TryGetValue((i, j), out int k) ? fit.StandardizedResiduals[k] : null,
                     back,
                     back is Concentration b ? ResponseFactorCalibration.RelativeError(b.Value, set.Analyte[i]) : null,
-                    null);
+                    s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]));
             }
 
             double mean = StandardSet.MeanRatio(s);
