@@ -11,8 +11,8 @@ namespace InternalStdCal.Quantitation;
 /// A measured solution of unknown analyte concentration: its IS concentration (as spiked into the measured
 /// solution) and one or more injections.
 /// </summary>
-/// <remarks>Immutable. Equality is exact: same label (ordinal), equal IS concentration and equal injections in order.</remarks>
-public sealed class UnknownSample : IEquatable<UnknownSample>
+/// <remarks>Immutable.</remarks>
+public sealed class UnknownSample
 {
     private readonly Injection[] _injections;
 
@@ -79,24 +79,4 @@ public sealed class UnknownSample : IEquatable<UnknownSample>
 
     /// <summary>Mean response ratio analyte/IS of the injections.</summary>
     public double MeanResponse => _injections.Average(i => i.Ratio);
-
-    /// <inheritdoc />
-    public bool Equals(UnknownSample? other) =>
-        other is not null
-        && string.Equals(Label, other.Label, StringComparison.Ordinal)
-        && InternalStandardConcentration.Equals(other.InternalStandardConcentration)
-        && _injections.SequenceEqual(other._injections);
-
-    /// <inheritdoc />
-    public override bool Equals(object? obj) => Equals(obj as UnknownSample);
-
-    /// <inheritdoc />
-    public override int GetHashCode() =>
-        (StringComparer.Ordinal.GetHashCode(Label) * 397) ^ InternalStandardConcentration.GetHashCode() ^ (_injections.Length * 31);
-
-    /// <summary>Prints "U-1: IS 5 µg/L, 2 injections".</summary>
-    /// <returns>The text.</returns>
-    public override string ToString() =>
-        Label + ": IS " + InternalStandardConcentration + ", " + _injections.Length.ToString(System.Globalization.CultureInfo.InvariantCulture)
-        + (_injections.Length == 1 ? " injection" : " injections");
 }
