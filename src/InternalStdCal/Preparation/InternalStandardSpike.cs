@@ -90,8 +90,8 @@ public sealed class InternalStandardSpike
         return new InternalStandardSpike(spikeSolution, addition, timing, measured);
     }
 
-    /// <summary>Prints e.g. "IS 0.10000 mg/L, u = 0.00060 mg/L (0.6 %) in the measured solution; 100 µL into 10 mL;
-    /// added before sample preparation" (invariant culture).</summary>
+    /// <summary>Prints e.g. "IS 0.100000 mg/L, u = 0.000964 mg/L (0.964 %) in the measured solution; 100 µL into
+    /// 10 mL; added after sample preparation" (invariant culture).</summary>
     /// <returns>The text.</returns>
     public override string ToString() =>
         "IS " + ResultText.Format(Concentration) + " in the measured solution; " + Addition.Label + "; added "

@@ -138,14 +138,17 @@ public sealed class UncertaintyBudget
         }
 
         double denominator = 0;
+        double smallest = double.PositiveInfinity;
         for (int i = 0; i < terms.Count; i++)
         {
-            if (terms[i].DegreesOfFreedom is double nu)
+            if (terms[i].DegreesOfFreedom is double nu && contributions[i] > 0)
             {
                 denominator += Square(Square(contributions[i] / combined)) / nu;
+                smallest = Math.Min(smallest, nu);
             }
         }
 
-        return denominator > 0 ? 1 / denominator : null;
+        // ν_eff ≥ min νᵢ holds exactly; the bound only absorbs rounding (e.g. a single dominant term with ν = 1).
+        return denominator > 0 ? Math.Max(1 / denominator, smallest) : null;
     }
 }

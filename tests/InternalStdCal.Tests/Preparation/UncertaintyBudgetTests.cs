@@ -31,6 +31,18 @@ public class UncertaintyBudgetTests
     }
 
     [Fact]
+    public void EffectiveDegreesOfFreedom_NeverBelowSmallestInput()
+    {
+        // ν_eff ≥ min νᵢ (Welch–Satterthwaite); with ν = 1 everywhere the bound is reached up to rounding.
+        PreparedSolution s = PreparedSolution.FromCertificate(
+            "Stock", Measured.TypeA(Concentration.FromMilligramsPerLitre(3), Concentration.FromMilligramsPerLitre(0.7), 1))
+            .Dilute(DilutionStep.Volumetric(
+                Measured.TypeA(Volume.FromMillilitres(1), Volume.FromMillilitres(1e-9), 1),
+                Measured.TypeA(Volume.FromMillilitres(7), Volume.FromMillilitres(3e-9), 1)));
+        Assert.True(s.Budget.EffectiveDegreesOfFreedom >= 1);
+    }
+
+    [Fact]
     public void Rows_CarryInputDetails()
     {
         UncertaintyContribution final = WelchSatterthwaiteCase().Budget.Contributions[^1];
