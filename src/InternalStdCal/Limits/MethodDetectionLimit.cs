@@ -95,8 +95,7 @@ public static class MethodDetectionLimit
         }
         else if (nb > 100)
         {
-            int rank = (int)Math.Round(0.99 * nb, MidpointRounding.AwayFromZero);
-            rank = Math.Min(nb, Math.Max(1, rank));
+            int rank = (int)(((99L * nb) + 50) / 100); // round(0.99·n), halves up, in exact integer arithmetic
             double?[] sorted = blanks.OrderBy(v => v is null ? 0 : 1).ThenBy(v => v ?? 0).ToArray();
             if (sorted[rank - 1] is double p)
             {

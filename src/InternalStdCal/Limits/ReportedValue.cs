@@ -41,7 +41,7 @@ public sealed class ReportedValue : IEquatable<ReportedValue>
     public override string ToString() => ToString(IsCensored ? 2 : 3);
 
     /// <summary>Prints as <see cref="ToString()"/> with the number (limit or estimate) to the given significant digits,
-    /// trailing zeros kept.</summary>
+    /// trailing zeros kept; digits before the decimal point are never dropped (1234.56 with 2 digits prints "1235").</summary>
     /// <param name="significantDigits">1 to 15.</param>
     /// <returns>The text.</returns>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="significantDigits"/> is outside 1–15.</exception>

@@ -106,6 +106,26 @@ public class MethodDetectionLimitTests
     }
 
     [Fact]
+    public void Compute_150Blanks_HalfRankRoundsUp()
+    {
+        // Rank round(0.99·n) to the nearest whole number (40 CFR Part 136 Appendix B, from memory): 0.99·150 = 148.5 → 149
+        // (halves up).
+        var blanks = Enumerable.Range(1, 150).Select(i => N(i / 100.0)).ToList();
+        MdlResult r = MethodDetectionLimit.Compute(LimitsData.WorkedSpikes(), blanks, LimitsData.Ug(5));
+        Assert.Equal(LimitsData.Ug(1.49), r.BlankMdl);
+    }
+
+    [Fact]
+    public void Compute_PercentileOnABlankWithoutNumber_NotApplicable()
+    {
+        // Blanks without a numeric result rank below every numeric one (this library's convention, stated in the docs).
+        var blanks = Enumerable.Repeat(BlankResult.NoNumericResult, 120).Append(N(0.02)).ToList();
+        MdlResult r = MethodDetectionLimit.Compute(LimitsData.WorkedSpikes(), blanks, Spike);
+        Assert.Equal(MdlBlankCase.NotApplicable, r.BlankCase);
+        Assert.Contains(r.Warnings, w => w.Contains("99th percentile", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Compute_FewBlanksAndSpikeFarAboveMdl_Warns()
     {
         // Appendix B asks for at least 7 blanks (VERIFIED in the draft text, field-reference §3.2) and a spike level of
