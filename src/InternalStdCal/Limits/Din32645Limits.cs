@@ -20,7 +20,7 @@ namespace InternalStdCal.Limits;
 /// </remarks>
 public static class Din32645Limits
 {
-    private const int MaxIterations = 10_000;
+    private const int MaxIterations = 1_000_000;
 
     /// <summary>Computes x_NG, x_EG and x_BG in the calibration's unit.</summary>
     /// <param name="calibration">Unweighted straight line with intercept, every injection fitted, slope &gt; 0, s_y/x &gt; 0.</param>
@@ -35,6 +35,8 @@ public static class Din32645Limits
     /// injection, its slope ≤ 0 or s_y/x = 0, the calibration is so imprecise that x_BG has no solution
     /// (k²·s_x0²·t²/Q_x ≥ 1), or the IS concentration is missing/of another kind.</exception>
     /// <exception cref="ArgumentOutOfRangeException">m, α or k is out of range, or the IS concentration is ≤ 0.</exception>
+    /// <exception cref="InvalidOperationException">The iteration (a contraction with rate ≤ k·s_x0·t/√Q_x &lt; 1) needs more
+    /// than 10⁶ steps, i.e. that rate is within about 3e-5 of 1.</exception>
     public static Din32645Result Compute(RegressionCalibration calibration, int sampleReplicates = 1, double alpha = 0.05, double k = 3, Concentration? internalStandardConcentration = null)
     {
         RegressionFit fit = LimitCalibration.StraightLine(calibration, nameof(calibration), "DIN 32645", allowThroughOrigin: false, requireOrdinaryLeastSquares: true);
@@ -80,7 +82,7 @@ public static class Din32645Limits
             if (iterations >= MaxIterations)
             {
                 throw new InvalidOperationException(
-                    FormattableString.Invariant($"The x_BG iteration did not reach 1e-12 relative in {MaxIterations} steps (k²·s_x0²·t²/Q_x = {c * c / qx}); this should not happen for a contraction."));
+                    FormattableString.Invariant($"The x_BG iteration did not reach 1e-12 relative in {MaxIterations} steps: its rate k·s_x0·t/√Q_x = {c / Math.Sqrt(qx)} is too close to 1."));
             }
         }
 

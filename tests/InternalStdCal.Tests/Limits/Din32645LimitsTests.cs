@@ -1,5 +1,8 @@
 using System;
 using System.Linq;
+using FsCheck;
+using FsCheck.Fluent;
+using FsCheck.Xunit;
 using InternalStdCal.Calibration;
 using InternalStdCal.Limits;
 using InternalStdCal.Tests.Calibration;
@@ -69,4 +72,21 @@ public class Din32645LimitsTests
         Assert.Equal("calibration", e.ParamName);
         Assert.Contains("no solution", e.Message, StringComparison.Ordinal);
     }
+
+    // Property (x_NG, x_BG ∝ s_y/x / b, DIN 32645 and ISO 11843-2 formulas): multiplying every response by c scales s_y/x
+    // and b alike, so the limits on the concentration axis do not change.
+    [Property(MaxTest = 50)]
+    public Property Compute_ScalingAllResponses_LeavesTheLimitsUnchanged() =>
+        Prop.ForAll(Gen.Choose(1, 100_000).Select(i => i / 1000.0).ToArbitrary(), c =>
+        {
+            var scaled = FieldReferenceStandards.Fluorescence()
+                .Select(s => CalibrationStandard.Create(s.Label, s.AnalyteConcentration, s.InternalStandardConcentration, new Injection(c * s.Injections[0].AnalyteSignal, 1)))
+                .ToList();
+            RegressionCalibration cal = RegressionCalibration.Fit(scaled, CalibrationModel.Linear);
+            Din32645Result r = Din32645Limits.Compute(cal);
+            Iso11843Result iso = Iso11843Limits.Compute(cal);
+            return Math.Abs(r.QuantificationLimit.Value - 1.96279) < 5e-6
+                && Math.Abs(r.DecisionLimit.Value - 0.546759) < 5e-7
+                && Math.Abs(iso.MinimumDetectableValue.Value - (0.546759 * 3.86994 / 2.01505)) < 1e-5;
+        });
 }
