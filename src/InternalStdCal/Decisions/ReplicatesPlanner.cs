@@ -250,7 +250,16 @@ public static class ReplicatesPlanner
     {
         int df = n - 1;
         double critical = StudentTQuantile.OneSided(1 - alpha, df);
-        return NoncentralT.UpperTail(critical, df, effect * Math.Sqrt(n));
+        double noncentrality = effect * Math.Sqrt(n);
+
+        // T′ = (Z + δ)/S with S = √(χ²_ν/ν): for δ ≥ 40(c + 1), P(T′ ≤ c) ≤ P(Z ≤ −δ/2) + P(S ≥ δ/(2c)) < 1e-80,
+        // so the power is 1 in double precision; skip the series, whose length grows with δ².
+        if (noncentrality >= 40 * (critical + 1))
+        {
+            return 1;
+        }
+
+        return NoncentralT.UpperTail(critical, df, noncentrality);
     }
 
     private static double Distance(SpecificationLimit limit, Concentration expectedMean)

@@ -13,7 +13,9 @@ namespace InternalStdCal.Decisions;
 /// <para>Immutable. Results assessed against the limit must be concentrations of the same kind (mass concentration,
 /// amount concentration or mass fraction); they are converted to the limit's unit before comparison.</para>
 /// <para>Equality is exact: same direction, same name and equal <see cref="Concentration"/> values.</para>
-/// <para>The limit itself comes from the specification, regulation or contract; the library does not judge it.</para>
+/// <para>The limit itself comes from the specification, regulation or contract; the library does not judge it.
+/// Decisions against it support, never replace, the responsible analyst's decision: the laboratory's validated
+/// method, its quality system, local regulations and licensed practice decide.</para>
 /// </remarks>
 public sealed class SpecificationLimit : IEquatable<SpecificationLimit>
 {

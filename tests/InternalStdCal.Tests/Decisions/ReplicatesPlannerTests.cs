@@ -103,6 +103,17 @@ public class ReplicatesPlannerTests
             return reaches && minimal && plan.Replicates >= plan.NormalApproximation - 1;
         });
 
+    // T′ = (Z + δ)/S: for δ far beyond the critical value the power is 1 to double precision (definition of the
+    // non-central t); the planner's shortcut above δ = 40(c + 1) agrees with the series just below it.
+    [Fact]
+    public void Power_HugeEffect_IsOneAndContinuousAtTheShortcut()
+    {
+        Assert.Equal(1, ReplicatesPlanner.Power(1e6, 2, 0.05));
+        Assert.Equal(1, ReplicatesPlanner.Power(200, 2, 0.05), 15);
+        Assert.Equal(2, ReplicatesPlanner.ForEffectSize(1e4, 0.05, 0.99).Replicates);
+        Assert.Null(ReplicatesPlanner.ForEffectSize(1e4, 0.05, 0.99).PowerWithOneFewer);
+    }
+
     // Bad input.
     [Fact]
     public void ForExpectedMean_MeanOnTheLimit_ThrowsBecauseNothingDecides()
