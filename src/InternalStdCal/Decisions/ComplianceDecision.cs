@@ -129,8 +129,9 @@ public sealed class ComplianceDecision
         _ => null,
     };
 
-    /// <summary>A short justification, e.g. "Non-compliant: mean of 4 replicates 10.6 mg/L is above the rejection
-    /// limit 10.3038 mg/L (upper limit 10 mg/L; ...)" with the rule, the probabilities and the distribution used.</summary>
+    /// <summary>A short justification, e.g. "Non-compliant (zone: fail): mean of 4 replicates 10.6 mg/L is above the
+    /// rejection limit 10.3038 mg/L (upper limit 10 mg/L). Rule: ...", followed by u, the guard band, the test
+    /// statistic and the probability beyond the limit with the distribution used.</summary>
     /// <returns>The text (invariant culture).</returns>
     public override string ToString()
     {

@@ -164,10 +164,10 @@ public sealed class DecisionRule : IEquatable<DecisionRule>
     /// <param name="limit">The limit.</param>
     /// <param name="result">The result and its standard uncertainty, of the same kind as the limit.</param>
     /// <returns>The decision.</returns>
-    /// <exception cref="ArgumentNullException"><paramref name="limit"/> is null.</exception>
+    /// <exception cref="ArgumentNullException"><paramref name="limit"/> is null, or the rule is
+    /// <see cref="DecisionRuleKind.ExpandedUncertaintyGuardBand"/> (needs a <see cref="Coverage"/>; reported as 'coverage').</exception>
     /// <exception cref="ArgumentException">The result is of another kind than the limit; the rule needs a non-zero
-    /// uncertainty and u = 0; the rule is <see cref="DecisionRuleKind.ExpandedUncertaintyGuardBand"/> (needs a
-    /// <see cref="Coverage"/>); or the rule is a t test and the result has no degrees of freedom.</exception>
+    /// uncertainty and u = 0; or the rule is a t test and the result has no degrees of freedom.</exception>
     public ComplianceDecision Assess(SpecificationLimit limit, Measured<Concentration> result) => AssessResult(limit, result, null);
 
     /// <summary>Assesses one result with its uncertainty; <paramref name="coverage"/> states how U = k·u is formed.</summary>
@@ -186,7 +186,7 @@ public sealed class DecisionRule : IEquatable<DecisionRule>
     /// <param name="replicates">At least two results, all of the same kind as the limit.</param>
     /// <returns>The decision.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="limit"/> or <paramref name="replicates"/> is null, or the
-    /// rule is <see cref="DecisionRuleKind.ExpandedUncertaintyGuardBand"/> (needs a <see cref="Coverage"/>).</exception>
+    /// rule is <see cref="DecisionRuleKind.ExpandedUncertaintyGuardBand"/> (needs a <see cref="Coverage"/>; reported as 'coverage').</exception>
     /// <exception cref="ArgumentException">Fewer than two replicates; a replicate of another kind; or the rule needs a
     /// non-zero spread and all replicates are equal.</exception>
     public ComplianceDecision Assess(SpecificationLimit limit, IReadOnlyList<Concentration> replicates) => AssessReplicates(limit, replicates, null);

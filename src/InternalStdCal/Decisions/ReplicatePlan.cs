@@ -104,8 +104,9 @@ public sealed class ReplicatePlan
     public ReplicatePlan WithAlreadyMeasured(int alreadyMeasured) =>
         new(EffectSize, Alpha, TargetPower, Replicates, Power, PowerWithOneFewer, NormalApproximation, Limit, ExpectedMean, StandardDeviation, Guard.AtLeast(alreadyMeasured, 0, nameof(alreadyMeasured)));
 
-    /// <summary>Prints e.g. "8 replicates give power 0.815 (7 give 0.7544) to show compliance with upper limit 10 mg/L
-    /// in a one-sided t test at α = 0.05 (δ/σ = 1; target power 0.8; normal approximation n = 6.18)."</summary>
+    /// <summary>Prints e.g. "8 replicates give power 0.815 (7 give 0.7544) to decide in a one-sided t test at α = 0.05
+    /// (δ/σ = 1; target power 0.8; normal approximation n = 6.18)."; with a limit, "to show compliance with the upper
+    /// limit ..." or "to show non-compliance ...", and the replicates still to measure.</summary>
     /// <returns>The text (invariant culture).</returns>
     public override string ToString()
     {

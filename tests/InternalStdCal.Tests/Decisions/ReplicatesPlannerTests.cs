@@ -51,6 +51,15 @@ public class ReplicatesPlannerTests
         Assert.Null(ReplicatesPlanner.ForEffectSize(1, 0.05, 0.95).ExpectedOutcome);
     }
 
+    // Field-reference §8.2 (COMPUTED): δ/σ = 1, power 0.80 → n = 8 (0.81502; 7 give 0.75440; normal approx. 6.18).
+    [Fact]
+    public void ToString_EffectSizePlan_PrintsTheTableRow()
+    {
+        Assert.Equal(
+            "8 replicates give power 0.815 (7 give 0.7544) to decide in a one-sided t test at α = 0.05 (δ/σ = 1; target power 0.8; normal approximation n = 6.18).",
+            ReplicatesPlanner.ForEffectSize(1, 0.05, 0.80).ToString());
+    }
+
     // "How many more": the planner on the replicates measured so far (invented data; mean 10.6, s ≈ 0.3162).
     [Fact]
     public void ForReplicates_ThreeMeasured_ReportsHowManyMore()
