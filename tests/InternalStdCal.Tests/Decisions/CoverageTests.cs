@@ -1,0 +1,30 @@
+using System;
+using InternalStdCal.Decisions;
+using InternalStdCal.Tests.TestSupport;
+using Xunit;
+
+namespace InternalStdCal.Tests.Decisions;
+
+public class CoverageTests
+{
+    // Field-reference §6 (COMPUTED): z(0.975) = 1.95996398, t(0.975, 4) = 2.77644511; a stated factor is used as given.
+    [Fact]
+    public void FactorFor_ProbabilityAndFactor_GiveTheExpectedK()
+    {
+        Printed.Equal("1.95996398", Coverage.WithProbability(0.95).FactorFor(null));
+        Printed.Equal("2.77644511", Coverage.WithProbability(0.95).FactorFor(4));
+        Assert.Equal(2, Coverage.WithFactor(2).FactorFor(4));
+        Assert.Equal("k = 2", Coverage.WithFactor(2).ToString());
+        Assert.Equal("p = 0.95", Coverage.WithProbability(0.95).ToString());
+        Assert.Equal(Coverage.WithFactor(2), Coverage.WithFactor(2));
+        Assert.NotEqual(Coverage.WithFactor(2), Coverage.WithProbability(0.95));
+    }
+
+    [Fact]
+    public void Factories_BadArguments_Throw()
+    {
+        Assert.Equal("k", Assert.Throws<ArgumentOutOfRangeException>(() => Coverage.WithFactor(0)).ParamName);
+        Assert.Equal("probability", Assert.Throws<ArgumentOutOfRangeException>(() => Coverage.WithProbability(1)).ParamName);
+        Assert.Equal("degreesOfFreedom", Assert.Throws<ArgumentOutOfRangeException>(() => Coverage.WithProbability(0.95).FactorFor(0.5)).ParamName);
+    }
+}
