@@ -21,12 +21,15 @@ internal static class NoncentralT
 {
     private const int MaxTerms = 100_000;
 
+    /// <summary>Largest |δ| accepted: the series then needs a few thousand terms around its mode.</summary>
+    internal const double MaxAbsNoncentrality = 1000;
+
     /// <summary>P(T ≤ t) for T non-central t with <paramref name="df"/> degrees of freedom and non-centrality δ.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">t or δ not finite, df not positive and finite.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">t not finite, |δ| &gt; <see cref="MaxAbsNoncentrality"/>, df not positive and finite.</exception>
     internal static double Cdf(double t, double df, double delta)
     {
         Guard.Finite(t, nameof(t));
-        Guard.Finite(delta, nameof(delta));
+        Guard.InClosedRange(delta, -MaxAbsNoncentrality, MaxAbsNoncentrality, nameof(delta));
         Guard.Positive(df, nameof(df));
         if (double.IsInfinity(df))
         {

@@ -81,5 +81,7 @@ public class NoncentralTTests
         Assert.Equal("t", ex.ParamName);
         Assert.Throws<ArgumentOutOfRangeException>(() => NoncentralT.Cdf(1, 0, 1));
         Assert.Throws<ArgumentOutOfRangeException>(() => NoncentralT.Noncentrality(1.8, 5, 1));
+        var big = Assert.Throws<ArgumentOutOfRangeException>(() => NoncentralT.Cdf(2, 5, 1e5));
+        Assert.Equal("delta", big.ParamName);
     }
 }
