@@ -25,6 +25,9 @@ namespace InternalStdCal.Run;
 /// </remarks>
 public sealed class DriftTrend
 {
+    // A change over the run below this fraction of max|y| is arithmetic noise (constant data give slopes ~1e-28).
+    private const double RoundingLevel = 1e-12;
+
     private DriftTrend(double[] positions, double[] values, RegressionFit fit, DriftRule rule)
     {
         Positions = Array.AsReadOnly(positions);
@@ -44,7 +47,13 @@ public sealed class DriftTrend
         DriftOverRun = Slope * Span;
         DriftOverRunPercent = RelativeSlopePercent * Span;
         DriftOverRunPercentInterval = new ConfidenceInterval(RelativeSlopeInterval.Lower * Span, RelativeSlopeInterval.Upper * Span, rule.ConfidenceLevel);
-        IsSlopeSignificant = !SlopeInterval.Contains(0);
+        double maxAbs = 0;
+        foreach (double v in values)
+        {
+            maxAbs = Math.Max(maxAbs, Math.Abs(v));
+        }
+
+        IsSlopeSignificant = !SlopeInterval.Contains(0) && Math.Abs(DriftOverRun) > RoundingLevel * maxAbs;
         IsFlagged = rule.Flags(DriftOverRunPercent, IsSlopeSignificant);
     }
 
@@ -96,7 +105,10 @@ public sealed class DriftTrend
     /// <summary>Interval of <see cref="DriftOverRunPercent"/>: the slope interval times 100·(x_max − x_min)/ȳ.</summary>
     public ConfidenceInterval DriftOverRunPercentInterval { get; }
 
-    /// <summary>True when the slope interval excludes 0.</summary>
+    /// <summary>
+    /// True when the slope interval excludes 0 and the change over the run, |b|·(x_max − x_min), exceeds 1e-12·max|y|
+    /// (below that the slope is arithmetic rounding, e.g. for a constant series, and its interval is meaningless).
+    /// </summary>
     public bool IsSlopeSignificant { get; }
 
     /// <summary>True when <see cref="Rule"/> flags the trend as drift.</summary>
