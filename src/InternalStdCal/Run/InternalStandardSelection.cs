@@ -33,6 +33,9 @@ namespace InternalStdCal.Run;
 /// </remarks>
 public sealed class InternalStandardSelection
 {
+    // s(ln R) at or below this is arithmetic rounding (e.g. A/(3·A)): the ratio counts as constant.
+    private const double RoundingLevel = 1e-12;
+
     private InternalStandardSelection(
         string analyteName,
         int count,
@@ -198,7 +201,7 @@ public sealed class InternalStandardSelection
             .Append(" injections; analyte RSD ").Append(Text.F(AnalyteRsdPercent, 3)).Append(" %; one-sided Pitman–Morgan tests at α = ")
             .Append(Text.G(SignificanceLevel)).AppendLine("):");
         sb.Append("  ").Append(Text.Pad("rank", 6)).Append(Text.Pad("candidate", 16)).Append(Text.Pad("RSD IS %", 10)).Append(Text.Pad("RSD ratio %", 13))
-            .Append(Text.Pad("change %", 10)).Append(Text.Pad("rho(ln)", 9)).Append(Text.Pad("rho*", 8)).Append(Text.Pad("t(PM)", 9))
+            .Append(Text.Pad("change %", 10)).Append(Text.Pad("rho(ln)", 9)).Append(Text.Pad("rho*", 8)).Append(Text.Pad("t(PM)", 11))
             .Append(Text.Pad("p(less)", 10)).AppendLine("verdict");
         foreach (InternalStandardSelectionAssessment c in Candidates)
         {
@@ -210,7 +213,7 @@ public sealed class InternalStandardSelection
             sb.Append("  ").Append(Text.Pad(Text.I(c.Rank!.Value), 6)).Append(Text.Pad(c.Name, 16)).Append(Text.Pad(Text.F(s.CandidateRsdPercent, 3), 10))
                 .Append(Text.Pad(Text.F(s.RatioRsdPercent, 3), 13)).Append(Text.Pad(Text.Signed(s.RsdChangePercent, 1), 10))
                 .Append(Text.Pad(Text.F(s.LogCorrelation, 3), 9)).Append(Text.Pad(Text.F(s.CorrelationThreshold, 3), 8))
-                .Append(Text.Pad(s.PitmanMorganT is double t ? Text.F(t, 3) : "unbounded", 9)).Append(Text.Pad(Text.G(s.ImprovementPValue), 10))
+                .Append(Text.Pad(s.PitmanMorganT is double t ? Text.F(t, 3) : "unbounded", 11)).Append(Text.Pad(s.ImprovementPValue < 1e-4 ? "<0.0001" : Text.F(s.ImprovementPValue, 4), 10))
                 .AppendLine(VerdictText(c.Verdict));
         }
 
@@ -285,7 +288,7 @@ public sealed class InternalStandardSelection
         double sxx = CentredSumOfSquares(lnA);
         double syy = CentredSumOfSquares(lnR);
         double ratio = sxx / syy;
-        if (syy > 0 && !double.IsInfinity(ratio))
+        if (ratioLogSd > RoundingLevel && !double.IsInfinity(ratio))
         {
             f = ratio;
             r = Correlation(lnA, lnR);
@@ -301,7 +304,7 @@ public sealed class InternalStandardSelection
         }
         else
         {
-            warnings.Add("the ratio is the same at every injection: all scatter removed; make sure the candidate is not the analyte measured another way (e.g. another isotope of the same element)");
+            warnings.Add("the ratio is the same at every injection (to rounding): all scatter removed; make sure the candidate is not the analyte measured another way (e.g. another isotope of the same element)");
         }
 
         if (t is double tv)

@@ -73,7 +73,7 @@ public sealed class InternalStandardSelectionStatistics
     /// <summary>True when <see cref="LogCorrelation"/> &gt; <see cref="CorrelationThreshold"/>.</summary>
     public bool MeetsCorrelationThreshold => LogCorrelation > CorrelationThreshold;
 
-    /// <summary>F = s²(ln A)/s²(ln R); null when the ratio does not vary at all (s(ln R) = 0).</summary>
+    /// <summary>F = s²(ln A)/s²(ln R); null when the ratio does not vary at all (s(ln R) ≤ 1e-12, i.e. rounding only).</summary>
     public double? VarianceRatio { get; }
 
     /// <summary>r = corr(ln A, ln R) used by the Pitman–Morgan test; null when the ratio does not vary at all.</summary>
