@@ -18,7 +18,8 @@ namespace InternalStdCal.Run;
 /// concentration differences instead.</para>
 /// <para><b>Method</b> (field reference §9). Per candidate: RSD of the raw analyte signal and of the ratio
 /// analyte/candidate; correlation ρ of the log signals and the threshold ρ &gt; s(ln I)/(2·s(ln A)); a one-sided
-/// Pitman–Morgan test of equal variances for paired data on X = ln A and Y = ln(A/I). Verdict: <c>Improves</c>
+/// Pitman–Morgan test of equal variances for paired data on X = ln A and Y = ln(A/I) (E. J. G. Pitman and
+/// W. A. Morgan, Biometrika 31, 1939 — from memory). Verdict: <c>Improves</c>
 /// when the test shows a reduction at the significance level α, <c>Worsens</c> when the opposite one-sided test
 /// shows an increase at α, otherwise <c>NoSignificantImprovement</c>. Candidates are ranked by the RSD of the
 /// ratio (ties keep the input order).</para>
@@ -30,6 +31,7 @@ namespace InternalStdCal.Run;
 /// (library default 1 %, no published source).</para>
 /// <para>Caution: the library computes; the lab's validated method, its QA system, local regulations and licensed
 /// practice decide. Chemical suitability (mass, ionisation energy, retention, isotope labelling) is not assessed.</para>
+/// <para>Immutable. No member returns NaN or infinity.</para>
 /// </remarks>
 public sealed class InternalStandardSelection
 {
@@ -82,7 +84,7 @@ public sealed class InternalStandardSelection
     /// <summary>Assesses and ranks the candidates.</summary>
     /// <param name="analyteName">Name of the analyte; not blank.</param>
     /// <param name="analyteSignals">Analyte signals in the injections; at least 3, each finite and &gt; 0, not all equal.</param>
-    /// <param name="candidates">Candidates; at least one, distinct names (ordinal, ignoring case), each with as many
+    /// <param name="candidates">Candidates; at least one, distinct names (ordinal, ignoring case and surrounding white space), each with as many
     /// signals as the analyte, in the same injection order.</param>
     /// <param name="significanceLevel">α of each one-sided test, in (0, 0.5); default 0.05.</param>
     /// <param name="blankWarningPercent">Warn when the mean method-blank signal exceeds this % of the candidate's mean
@@ -230,6 +232,8 @@ public sealed class InternalStandardSelection
             }
         }
 
+        sb.AppendLine("  (rho(ln) = corr(ln A, ln IS); rho* = s(ln IS)/(2·s(ln A)): the ratio scatters less exactly when rho(ln) > rho*;"
+            + " p(less) = one-sided p value of a reduction; change % = RSD ratio/RSD analyte − 1)");
         sb.Append("  ").Append(Best is InternalStandardSelectionAssessment best
             ? "best: " + best.Name + " (least scatter of the ratio, significant reduction)"
             : "no candidate reduces the scatter significantly");

@@ -9,9 +9,10 @@ namespace InternalStdCal.Run;
 /// <remarks>
 /// With A the analyte signal, I the candidate's and R = A/I, the log-scale sample statistics obey exactly
 /// s²(ln R) = s²(ln A) + s²(ln I) − 2ρ·s(ln A)·s(ln I), so the ratio scatters less than the raw signal exactly when
-/// ρ &gt; s(ln I)/(2·s(ln A)) (field reference §9, with the CV approximated by the SD of ln). The Pitman–Morgan
+/// ρ &gt; s(ln I)/(2·s(ln A)) (error propagation on the log scale; the CV is approximated by the SD of ln). The Pitman–Morgan
 /// test compares the variances of X = ln A and Y = ln R, which come from the same injections:
-/// t = (F − 1)·√(n − 2)/(2·√(F·(1 − r²))), F = s²_X/s²_Y, r = corr(X, Y), ν = n − 2 (field reference §9).
+/// t = (F − 1)·√(n − 2)/(2·√(F·(1 − r²))), F = s²_X/s²_Y, r = corr(X, Y), ν = n − 2 (Pitman and Morgan,
+/// Biometrika 31, 1939 — from memory). Immutable.
 /// </remarks>
 public sealed class InternalStandardSelectionStatistics
 {
