@@ -25,9 +25,9 @@ namespace InternalStdCal.Run;
 /// ratio (ties keep the input order).</para>
 /// <para><b>Refusals</b> (explained, never silent): a candidate with the analyte's name (ordinal, ignoring case and
 /// surrounding white space), with a signal identical to the analyte's at every injection, or with a signal that
-/// does not vary at all. <b>Warning</b>: the mean method-blank signal (blanks without the IS spike) exceeds a
-/// caller-set percentage of the candidate's mean signal — an internal standard should not be present in the
-/// samples (SW-846 Method 8000C §11.4.3, via the field reference §9); the percentage itself is the caller's choice
+/// does not vary (SD of its logarithm ≤ 1e-12, i.e. at most rounding). <b>Warning</b>: the mean method-blank
+/// signal (blanks without the IS spike) exceeds a caller-set percentage of the candidate's mean signal — an
+/// internal standard should not be present in the samples (SW-846 Method 8000C §11.4.3, via the field reference §9); the percentage itself is the caller's choice
 /// (library default 1 %, no published source).</para>
 /// <para>Caution: the library computes; the lab's validated method, its QA system, local regulations and licensed
 /// practice decide. Chemical suitability (mass, ionisation energy, retention, isotope labelling) is not assessed.</para>
@@ -92,8 +92,9 @@ public sealed class InternalStandardSelection
     /// <returns>The ranked assessment.</returns>
     /// <exception cref="ArgumentNullException">An argument or a candidate is null.</exception>
     /// <exception cref="ArgumentException">Fewer than 3 injections; an analyte signal missing, infinite or not
-    /// positive (the message names the index); all analyte signals equal; no candidates; duplicate candidate names;
-    /// or a candidate with a different number of signals (the message names it).</exception>
+    /// positive (the message names the index); all analyte signals equal, or varying only at the rounding level
+    /// (SD of ln ≤ 1e-12); no candidates; duplicate candidate names; or a candidate with a different number of
+    /// signals (the message names it).</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="significanceLevel"/> or
     /// <paramref name="blankWarningPercent"/> is outside its range.</exception>
     public static InternalStandardSelection Evaluate(
@@ -129,6 +130,16 @@ public sealed class InternalStandardSelection
                 nameof(analyteSignals));
         }
 
+        double[] lnA = a.Select(v => Math.Log(v)).ToArray();
+        double analyteRsd = Rsd(a);
+        double analyteLogSd = Sd(lnA);
+        if (analyteLogSd <= RoundingLevel)
+        {
+            throw new ArgumentException(
+                FormattableString.Invariant($"Parameter '{nameof(analyteSignals)}' of '{analyteName}' varies only at the rounding level (SD of ln = {Guard.Format(analyteLogSd)}); with no scatter there is nothing an internal standard could reduce."),
+                nameof(analyteSignals));
+        }
+
         var names = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
         foreach (InternalStandardSelectionCandidate c in candidates)
         {
@@ -146,9 +157,6 @@ public sealed class InternalStandardSelection
             }
         }
 
-        double[] lnA = a.Select(v => Math.Log(v)).ToArray();
-        double analyteRsd = Rsd(a);
-        double analyteLogSd = Sd(lnA);
 
         var assessed = new List<(InternalStandardSelectionCandidate Candidate, InternalStandardSelectionStatistics Stats, InternalStandardSelectionVerdict Verdict, List<string> Warnings)>();
         var refused = new List<InternalStandardSelectionAssessment>();
@@ -264,6 +272,11 @@ public sealed class InternalStandardSelection
         if (c.Signals.All(v => v == first))
         {
             return FormattableString.Invariant($"its signal is {Guard.Format(first)} at every injection; a signal that does not vary can neither follow nor correct the analyte's");
+        }
+
+        if (Sd(c.Signals.Select(v => Math.Log(v)).ToArray()) <= RoundingLevel)
+        {
+            return "its signal varies only at the rounding level; a signal that does not vary can neither follow nor correct the analyte's";
         }
 
         return null;

@@ -133,6 +133,22 @@ public class InternalStandardSelectionTests
     }
 
     [Fact]
+    public void Evaluate_SignalsVaryingOnlyInTheLastDigit_AreTreatedAsConstant()
+    {
+        // 1e6 and its neighbouring doubles: relative differences ~1e-16, below the documented 1e-12 rounding level.
+        double[] ulps = { 1e6, Math.BitIncrement(1e6), 1e6, Math.BitDecrement(1e6) };
+        double[] analyte = { 1000, 1010, 990, 1005 };
+
+        InternalStandardSelectionAssessment c = InternalStandardSelection.Evaluate("analyte", analyte, new[] { new InternalStandardSelectionCandidate("IS", ulps) }).Candidates.Single();
+        ArgumentException e = Assert.Throws<ArgumentException>(() => InternalStandardSelection.Evaluate("analyte", ulps, new[] { new InternalStandardSelectionCandidate("IS", analyte) }));
+
+        Assert.Equal(InternalStandardSelectionVerdict.Refused, c.Verdict);
+        Assert.Contains("varies only at the rounding level", c.Refusal, StringComparison.Ordinal);
+        Assert.Equal("analyteSignals", e.ParamName);
+        Assert.Contains("varies only at the rounding level", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Evaluate_SignalInMethodBlanks_WarnsAboveTheLevelOnly()
     {
         InternalStandardSelectionCandidate basis = Candidate("IS-0.80", 0.04, 0.8);
