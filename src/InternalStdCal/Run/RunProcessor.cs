@@ -391,6 +391,11 @@ public static class RunProcessor
                 }
 
                 bool? passed = window is null ? null : recovery is double p && window.Contains(p);
+                if (passed == false)
+                {
+                    _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
+                }
+
                 checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Quantitation?.Concentration, recovery, window, passed, b.Notes.ToList()));
             }
 
