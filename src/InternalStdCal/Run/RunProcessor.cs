@@ -74,7 +74,10 @@ public static class RunProcessor
 
         var duplicates = new List<DuplicateCheck>();
         var spikes = new List<SpikeCheck>();
-        State.PairChecks(run, method, results, duplicates, spikes);
+        State.PairChecks(method, results, duplicates, spikes);
+        var notes = run.Analytes.Where(a => method.For(a) is null)
+            .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
+            .ToList();
         return new RunReport(
             run,
             method,
@@ -84,7 +87,8 @@ public static class RunProcessor
             qc,
             duplicates,
             spikes,
-            state.Outcomes());
+            state.Outcomes(),
+            notes);
     }
 
     private sealed class RowState
@@ -185,7 +189,7 @@ public static class RunProcessor
             }
         }
 
-        internal static void PairChecks(AnalyticalRun run, RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
             foreach (AnalyteMethod a in method.Analytes)
             {
@@ -208,8 +212,6 @@ public static class RunProcessor
                     spikes.Add(Spike(a.Analyte, byId[row.ParentId!], s, added, method.SpikeRecovery));
                 }
             }
-
-            _ = run;
         }
 
         internal void Recoveries()

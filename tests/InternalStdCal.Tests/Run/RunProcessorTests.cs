@@ -294,6 +294,70 @@ public class RunProcessorTests
         AssertClose((((0.21990625 + 0.32) / 2) - PbIntercept) / PbSlope, r.InMeasuredSolution!.Value.Value);
     }
 
+    [Fact]
+    public void Process_AverageResponseFactor_MatchesHandComputedMeanRfAndLeavesTheBlankOutWithAReason()
+    {
+        // RF_i = A_x·C_is/(A_is·C_x) = y_i·10/x_i (SW-846 8000C §11.4.3, field-reference §0, VERIFIED):
+        //   1.17, 1.105, 1.055, 1.02, 1.0146667 → mean RF = 8.047/7.5 = 1.07293333
+        // S1: C = A_x·C_is/(A_is·mean RF) = 0.3199375·10/1.07293333 = 2.98189543 µg/L → ×10 = 29.8189543 µg/L.
+        RunMethod method = WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.AverageResponseFactor));
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), method);
+        AssertClose(383925.0 / 128752, report.ResultFor("S1", "Pb")!.InMeasuredSolution!.Value.Value);
+        AssertClose(3839250.0 / 128752, report.ResultFor("S1", "Pb")!.InSample!.Value.Value.Value);
+        InjectionOutcome blank = report.Injections[0];
+        Assert.Equal(InjectionStatus.Excluded, blank.AnalyteStatuses["Pb"]);
+        Assert.Contains(blank.Reasons, r => r.Contains("response-factor", StringComparison.Ordinal));
+        Assert.Equal(InjectionStatus.UsedInCalibration, blank.Status); // still a Cd calibration point
+    }
+
+    [Fact]
+    public void Process_SinglePointModelWithFiveLevels_ReportsTheFailure()
+    {
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.SinglePointResponseFactor)));
+        AnalyteCalibration pb = report.Calibrations.Single(c => c.Analyte == "Pb");
+        Assert.Null(pb.Calibration);
+        Assert.Contains("exactly one standard level", pb.Failure, StringComparison.Ordinal);
+        Assert.All(report.Injections.Skip(1).Take(5), o => Assert.Equal(InjectionStatus.Excluded, o.AnalyteStatuses["Pb"]));
+    }
+
+    [Fact]
+    public void Process_BlanksExcludedByOptions_BlankRowExcludedWithReason()
+    {
+        var options = new CalibrationOptions { Blanks = BlankHandling.Exclude };
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.Linear, options: options)));
+        Assert.Equal(5, report.Calibrations.Single(c => c.Analyte == "Pb").Calibration!.PointCount);
+        Assert.Equal(InjectionStatus.Excluded, report.Injections[0].AnalyteStatuses["Pb"]);
+        Assert.Contains(report.Injections[0].Reasons, r => r.StartsWith("Pb: blank left out", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Process_RecoveryAgainstStandardsMean_UsesTheStandardsOnly()
+    {
+        // Bi in the standards: (98000 + 102000 + 99000 + 101000 + 100000)/5 = 100000; CAL-1: 98000/100000 = 98 %.
+        RunMethod m = RunScenario.Method();
+        var method = new RunMethod(m.Name, m.Analytes, m.InternalStandardConcentrations, InternalStandardRecoveryWindow.Custom("lab window", "common practice (test)", 80, 120, RecoveryReference.CalibrationStandardsMean));
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), method);
+        Assert.Equal(100000, report.InternalStandardReferences["Bi"]);
+        AssertClose(98, report.Injections[1].InternalStandardRecoveries[0].RecoveryPercent!.Value);
+        Assert.False(report.Injections.Single(o => o.Injection.Id == "S3").InternalStandardRecoveries[0].WithinWindow); // 55 %
+    }
+
+    [Fact]
+    public void Process_AnalyteNotInMethod_IsNamedInTheNotes()
+    {
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.Linear), withCd: false));
+        Assert.Contains(report.Notes, n => n.Contains("'Cd'", StringComparison.Ordinal));
+        Assert.DoesNotContain(report.Results, r => r.Analyte == "Cd");
+        Assert.Equal(17, report.Injections.Count);
+    }
+
+    private static RunMethod WithPb(AnalyteMethod pb, bool withCd = true) =>
+        new(
+            "m",
+            withCd ? new[] { pb, new AnalyteMethod("Cd", "In", RatioModel.Linear) } : new[] { pb },
+            new Dictionary<string, Concentration> { ["Bi"] = RunScenario.IsConcentration, ["In"] = RunScenario.IsConcentration },
+            InternalStandardRecoveryWindow.UsEpa200Point8);
+
     private static void AssertClose(double expected, double actual, double relative = Tol) =>
         Assert.True(Math.Abs(expected - actual) <= relative * Math.Max(1e-12, Math.Abs(expected)), $"expected {expected:R}, got {actual:R}");
 }
