@@ -25,8 +25,8 @@ namespace InternalStdCal.Run;
 /// (<see cref="SampleQuantitation.Quantify"/>) and carried to the original sample through its
 /// <see cref="SamplePreparation"/>. Quality-control rows are judged one injection at a time.</para>
 /// <para><b>Brackets.</b> A failed quality-control check flags every sample injected between the previous and the next
-/// quality-control injection of the run (common practice); a check that applies but cannot be computed counts as
-/// failed.</para>
+/// quality-control injection of the run with a nominal value of that analyte (common practice); a check that applies
+/// but cannot be computed counts as failed.</para>
 /// <para>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
 /// decide what a flag or a failed check means for the reported results.</para>
 /// </remarks>
@@ -67,7 +67,7 @@ public static class RunProcessor
             calibrations.Add(cal);
             List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
             List<QualityControlCheck> checks = state.QualityControl(a, cal);
-            State.Bracket(checks, analyteResults, run);
+            State.Bracket(checks, analyteResults);
             results.AddRange(analyteResults);
             qc.AddRange(checks);
         }
@@ -169,9 +169,10 @@ public static class RunProcessor
 
         internal IReadOnlyDictionary<string, double?> References => _references;
 
-        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results, AnalyticalRun run)
+        // Brackets are formed by the QC injections that carry a nominal value of this analyte, in injection order.
+        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results)
         {
-            int[] qcOrders = run.Injections.Where(r => r.Role == InjectionRole.QualityControl).Select(r => r.Order).ToArray();
+            int[] qcOrders = checks.Select(c => c.Injection.Order).ToArray();
             foreach (QualityControlCheck c in checks.Where(c => c.Passed == false))
             {
                 int k = Array.IndexOf(qcOrders, c.Injection.Order);

@@ -351,6 +351,32 @@ public class RunProcessorTests
         Assert.Equal(17, report.Injections.Count);
     }
 
+    [Fact]
+    public void Process_NegativeAnalyteSignal_IsUsedAndFlagged()
+    {
+        // A blank-corrected signal may be negative: y = −500/100000 = −0.005 → x0 = (−0.005 − 0.01984375)/0.10003125 < 0.
+        List<RunInjection> rows = RunScenario.Rows();
+        rows.Add(RunInjection.Sample(18, "S6", RunScenario.Signals(-500, 100000, 0, 50000)));
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        AnalyteResult pb = report.ResultFor("S6", "Pb")!;
+        AssertClose((-0.005 - PbIntercept) / PbSlope, pb.InMeasuredSolution!.Value.Value);
+        Assert.True(pb.Has(ResultQualifiers.NonPositiveAnalyteSignal | ResultQualifiers.BelowLimitOfDetection | ResultQualifiers.Extrapolated));
+        Assert.True(report.ResultFor("S6", "Cd")!.Has(ResultQualifiers.NonPositiveAnalyteSignal));
+        Assert.Contains(report.Injections.Single(o => o.Injection.Order == 18).Reasons, r => r.StartsWith("Pb: analyte signal -500 ≤ 0 (used)", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Process_QcOfAnotherAnalyteOnly_DoesNotCloseTheBracket()
+    {
+        // A Pb-only check inserted at order 13 (later rows move up by one): if every QC row closed brackets, the failing
+        // Cd check (now order 16) would bracket only 14–15 and S1 (order 9) would go unflagged. Brackets are per analyte.
+        List<RunInjection> rows = RunScenario.Rows().Select(r => r.Order >= 13 ? RunProcessorPropertyTests.Rebuild(r, r.Order + 1, r.Signals) : r).ToList();
+        rows.Add(RunInjection.QualityControl(13, "PB-CHK", new Dictionary<string, Concentration> { ["Pb"] = RunScenario.Ug(5) }, RunScenario.Signals(52000, 100000, 1, 50000)));
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        Assert.True(report.ResultFor("S1", "Cd")!.Has(ResultQualifiers.QualityControlFailureInBracket));
+        Assert.Equal(InjectionStatus.Excluded, report.Injections.Single(o => o.Injection.Id == "PB-CHK").AnalyteStatuses["Cd"]);
+    }
+
     private static RunMethod WithPb(AnalyteMethod pb, bool withCd = true) =>
         new(
             "m",
