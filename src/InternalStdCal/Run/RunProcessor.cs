@@ -1,0 +1,700 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using InternalStdCal.Calibration;
+using InternalStdCal.Internal;
+using InternalStdCal.Preparation;
+using InternalStdCal.Quantitation;
+using InternalStdCal.Quantities;
+
+namespace InternalStdCal.Run;
+
+/// <summary>
+/// Processes an analytical run with a method in one call: internal-standard (IS) recoveries, one calibration per
+/// analyte with its acceptance verdict, quantitation of every sample, back-calculation to the original sample,
+/// quality-control recoveries, duplicate RPDs, spike recoveries, flags, and a status row for every injection.
+/// </summary>
+/// <remarks>
+/// <para><b>Signals.</b> A row whose analyte or IS signal is missing, or whose IS signal is ≤ 0, is set aside for
+/// that analyte, with the reason in its status row and <see cref="ResultQualifiers.MissingOrInvalidSignal"/> on the result;
+/// it never stops the run. Analyte signals ≤ 0 are used and flagged.</para>
+/// <para><b>Calibration.</b> Standards with the same id are replicate injections of one level; calibration-blank rows
+/// are a level with nominal 0 (used or left out as <see cref="CalibrationOptions.Blanks"/> says; response-factor models
+/// never use them). A calibration that cannot be made is reported with the reason; its samples are not quantified.</para>
+/// <para><b>Samples.</b> Rows with the same id are replicate injections; their mean ratio is read off the calibration
+/// (<see cref="SampleQuantitation.Quantify"/>) and carried to the original sample through its
+/// <see cref="SamplePreparation"/>. Quality-control rows are judged one injection at a time.</para>
+/// <para><b>Brackets.</b> A failed quality-control check flags every sample injected between the previous and the next
+/// quality-control injection of the run with a nominal value of that analyte (common practice); a check that applies
+/// but cannot be computed counts as failed.</para>
+/// <para>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
+/// decide what a flag or a failed check means for the reported results.</para>
+/// </remarks>
+public static class RunProcessor
+{
+    /// <summary>Processes a run.</summary>
+    /// <param name="run">The run.</param>
+    /// <param name="method">The method; its analytes and IS must be declared in the run.</param>
+    /// <returns>The report.</returns>
+    /// <exception cref="ArgumentNullException">An argument is null.</exception>
+    /// <exception cref="ArgumentException">The method names an analyte or IS the run does not declare, or a reporting
+    /// limit is of another kind than the analyte's standards.</exception>
+    public static RunReport Process(AnalyticalRun run, RunMethod method)
+    {
+        Guard.NotNull(run, nameof(run));
+        Guard.NotNull(method, nameof(method));
+        foreach (AnalyteMethod a in method.Analytes)
+        {
+            if (!run.Analytes.Contains(a.Analyte, StringComparer.Ordinal))
+            {
+                throw new ArgumentException($"Parameter 'method': analyte '{a.Analyte}' is not declared in run '{run.Name}' (declared: {string.Join(", ", run.Analytes)}).", nameof(method));
+            }
+
+            if (!run.InternalStandards.Contains(a.InternalStandard, StringComparer.Ordinal))
+            {
+                throw new ArgumentException($"Parameter 'method': IS '{a.InternalStandard}' of analyte '{a.Analyte}' is not declared in run '{run.Name}' (declared: {string.Join(", ", run.InternalStandards)}).", nameof(method));
+            }
+        }
+
+        var state = new State(run, method);
+        state.Recoveries();
+        var calibrations = new List<AnalyteCalibration>();
+        var results = new List<ResultBuilder>();
+        var qc = new List<QualityControlCheck>();
+        foreach (AnalyteMethod a in method.Analytes)
+        {
+            AnalyteCalibration cal = state.Calibrate(a);
+            calibrations.Add(cal);
+            List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
+            List<QualityControlCheck> checks = state.QualityControl(a, cal);
+            State.Bracket(checks, analyteResults);
+            results.AddRange(analyteResults);
+            qc.AddRange(checks);
+        }
+
+        var duplicates = new List<DuplicateCheck>();
+        var spikes = new List<SpikeCheck>();
+        State.PairChecks(method, results, duplicates, spikes);
+        var notes = run.Analytes.Where(a => method.For(a) is null)
+            .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
+            .ToList();
+        return new RunReport(
+            run,
+            method,
+            state.References,
+            calibrations,
+            results.Select(r => r.Build()).ToList(),
+            qc,
+            duplicates,
+            spikes,
+            state.Outcomes(),
+            notes);
+    }
+
+    private sealed class RowState
+    {
+        internal RowState(RunInjection row)
+        {
+            Row = row;
+        }
+
+        internal RunInjection Row { get; }
+
+        internal Dictionary<string, InjectionStatus> Statuses { get; } = new(StringComparer.Ordinal);
+
+        internal List<string> Reasons { get; } = new();
+
+        internal List<InternalStandardRecovery> Recoveries { get; } = new();
+
+        internal void Set(string analyte, InjectionStatus status, string? reason)
+        {
+            Statuses[analyte] = status;
+            if (reason is not null)
+            {
+                Reasons.Add(analyte + ": " + reason);
+            }
+        }
+    }
+
+    private sealed class ResultBuilder
+    {
+        internal ResultBuilder(string id, InjectionRole role, string analyte, IReadOnlyList<RunInjection> rows)
+        {
+            Id = id;
+            Role = role;
+            Analyte = analyte;
+            Rows = rows;
+        }
+
+        internal string Id { get; }
+
+        internal InjectionRole Role { get; }
+
+        internal string Analyte { get; }
+
+        internal IReadOnlyList<RunInjection> Rows { get; }
+
+        internal QuantitationResult? Quantitation { get; set; }
+
+        internal SampleResult? InSample { get; set; }
+
+        internal Concentration? SampleLower { get; set; }
+
+        internal Concentration? SampleUpper { get; set; }
+
+        internal ResultQualifiers Qualifiers { get; set; }
+
+        internal List<string> Notes { get; } = new();
+
+        internal AnalyteResult Build() =>
+            new(Id, Role, Analyte, Rows.Select(r => r.Order).ToList(), Quantitation, InSample, SampleLower, SampleUpper, Qualifiers, Notes.ToList());
+    }
+
+    private sealed class State
+    {
+        private readonly AnalyticalRun _run;
+        private readonly RunMethod _method;
+        private readonly Dictionary<int, RowState> _rows = new();
+        private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
+
+        internal State(AnalyticalRun run, RunMethod method)
+        {
+            _run = run;
+            _method = method;
+            foreach (RunInjection r in run.Injections)
+            {
+                _rows[r.Order] = new RowState(r);
+            }
+        }
+
+        internal IReadOnlyDictionary<string, double?> References => _references;
+
+        // Brackets are formed by the QC injections that carry a nominal value of this analyte, in injection order.
+        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results)
+        {
+            int[] qcOrders = checks.Select(c => c.Injection.Order).ToArray();
+            foreach (QualityControlCheck c in checks.Where(c => c.Passed == false))
+            {
+                int k = Array.IndexOf(qcOrders, c.Injection.Order);
+                int previous = k > 0 ? qcOrders[k - 1] : int.MinValue;
+                int next = k < qcOrders.Length - 1 ? qcOrders[k + 1] : int.MaxValue;
+                foreach (ResultBuilder r in results)
+                {
+                    if (r.Rows.Any(row => row.Order > previous && row.Order < next))
+                    {
+                        r.Qualifiers |= ResultQualifiers.QualityControlFailureInBracket;
+                        r.Notes.Add("QC " + c.Injection + " failed (recovery " + (c.RecoveryPercent is double p ? Text.F(p, 1) + " %" : "not computed")
+                            + ") and brackets this sample (injections between QC orders " + OrderText(previous) + " and " + OrderText(next) + ").");
+                    }
+                }
+            }
+        }
+
+        internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        {
+            foreach (AnalyteMethod a in method.Analytes)
+            {
+                var byId = results.Where(r => r.Analyte == a.Analyte).ToDictionary(r => r.Id, StringComparer.Ordinal);
+                foreach (ResultBuilder d in byId.Values.Where(r => r.Role == InjectionRole.SampleDuplicate))
+                {
+                    ResultBuilder parent = byId[d.Rows[0].ParentId!];
+                    duplicates.Add(Duplicate(a.Analyte, parent, d, method.DuplicateRpd));
+                }
+
+                foreach (ResultBuilder s in byId.Values.Where(r => r.Role == InjectionRole.SpikedSample))
+                {
+                    RunInjection row = s.Rows[0];
+                    if (!row.Added.TryGetValue(a.Analyte, out Concentration added))
+                    {
+                        s.Notes.Add("No spike recovery: no added amount for " + a.Analyte + ".");
+                        continue;
+                    }
+
+                    spikes.Add(Spike(a.Analyte, byId[row.ParentId!], s, added, method.SpikeRecovery));
+                }
+            }
+        }
+
+        internal void Recoveries()
+        {
+            InternalStandardRecoveryWindow window = _method.RecoveryWindow;
+            InjectionRole referenceRole = window.Reference == RecoveryReference.CalibrationBlankMean ? InjectionRole.CalibrationBlank : InjectionRole.CalibrationStandard;
+            foreach (string name in _run.InternalStandards)
+            {
+                var sum = default(CompensatedSum);
+                int n = 0;
+                foreach (RunInjection r in _run.Injections.Where(r => r.Role == referenceRole))
+                {
+                    if (r.Signals.InternalStandard(name) is double s && s > 0)
+                    {
+                        sum.Add(s);
+                        n++;
+                    }
+                }
+
+                double? reference = n > 0 ? sum.Value / n : null;
+                _references[name] = reference;
+                foreach (RowState st in _rows.Values)
+                {
+                    double? signal = st.Row.Signals.InternalStandard(name);
+                    double? pct = signal is double sg && sg > 0 && reference is double rf ? 100 * sg / rf : null;
+                    bool? within = pct is double p ? window.Contains(p) : null;
+                    st.Recoveries.Add(new InternalStandardRecovery(name, signal, reference, pct, within));
+                    if (within == false)
+                    {
+                        st.Reasons.Add("IS " + name + " recovery " + Text.F(pct!.Value, 1) + " % is outside " + window + ".");
+                    }
+                }
+            }
+        }
+
+        internal AnalyteCalibration Calibrate(AnalyteMethod a)
+        {
+            Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
+            RunInjection[] calRows = _run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank).ToArray();
+            bool rf = a.Model is RatioModel.AverageResponseFactor or RatioModel.SinglePointResponseFactor;
+            ConcentrationUnit? unit = calRows.Where(r => r.Nominal.ContainsKey(a.Analyte)).Select(r => (ConcentrationUnit?)r.Nominal[a.Analyte].Unit).FirstOrDefault();
+            CheckLimits(a, unit, "method");
+            var standards = new List<CalibrationStandard>();
+            var used = new List<RunInjection>();
+            foreach (IGrouping<string, RunInjection> level in calRows.GroupBy(r => r.Id, StringComparer.Ordinal))
+            {
+                var injections = new List<Injection>();
+                var levelRows = new List<RunInjection>();
+                Concentration nominal;
+                if (level.First().Role == InjectionRole.CalibrationBlank)
+                {
+                    if (rf || unit is null)
+                    {
+                        string why = rf ? "calibration blank not used by a response-factor model." : "no calibration standard carries a nominal concentration of this analyte.";
+                        foreach (RunInjection r in level)
+                        {
+                            _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                        }
+
+                        continue;
+                    }
+
+                    nominal = Concentration.From(0, unit.Value);
+                }
+                else if (!level.First().Nominal.TryGetValue(a.Analyte, out nominal))
+                {
+                    foreach (RunInjection r in level)
+                    {
+                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte in standard '" + r.Id + "'.");
+                    }
+
+                    continue;
+                }
+                else if (rf && nominal.Value == 0)
+                {
+                    foreach (RunInjection r in level)
+                    {
+                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "nominal 0 (blank) not used by a response-factor model.");
+                    }
+
+                    continue;
+                }
+
+                foreach (RunInjection r in level)
+                {
+                    (Injection? inj, string? why) = Signal(r, a);
+                    if (inj is null)
+                    {
+                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                        continue;
+                    }
+
+                    injections.Add(inj);
+                    levelRows.Add(r);
+                }
+
+                if (injections.Count > 0)
+                {
+                    standards.Add(new CalibrationStandard(level.Key, nominal, cIs, injections));
+                    used.AddRange(levelRows);
+                }
+            }
+
+            RatioCalibration? calibration = null;
+            string? failure = null;
+            try
+            {
+                calibration = Fit(a, standards);
+            }
+            catch (Exception e) when (e is ArgumentException or InvalidOperationException)
+            {
+                failure = e.Message;
+            }
+
+            AcceptanceVerdict? verdict = calibration is not null ? a.Acceptance?.Evaluate(calibration) : null;
+            foreach (RunInjection r in used)
+            {
+                if (calibration is null)
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "the calibration could not be made: " + failure);
+                }
+                else if (calibration.Standards.FirstOrDefault(s => s.Label == r.Id) is StandardResult s && !s.Included)
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "blank left out of the fit by the calibration options (back-calculated for information).");
+                }
+                else
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.UsedInCalibration, NonPositive(r, a));
+                }
+            }
+
+            return new AnalyteCalibration(a, calibration, verdict, failure, used.Select(r => r.Order).ToList());
+        }
+
+        internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
+        {
+            var list = new List<ResultBuilder>();
+            foreach (IGrouping<string, RunInjection> g in _run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal))
+            {
+                var b = new ResultBuilder(g.Key, g.First().Role, a.Analyte, g.ToList());
+                Quantify(a, cal, b, InjectionStatus.Quantified);
+                if (b.Quantitation is QuantitationResult q)
+                {
+                    ToSample(b, q);
+                    ApplyLimits(a, b, q);
+                }
+
+                list.Add(b);
+            }
+
+            return list;
+        }
+
+        internal List<QualityControlCheck> QualityControl(AnalyteMethod a, AnalyteCalibration cal)
+        {
+            var checks = new List<QualityControlCheck>();
+            RecoveryWindow? window = _method.QualityControlRecovery;
+            foreach (RunInjection r in _run.Injections.Where(r => r.Role == InjectionRole.QualityControl))
+            {
+                if (!r.Nominal.TryGetValue(a.Analyte, out Concentration nominal))
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
+                    continue;
+                }
+
+                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r });
+                Quantify(a, cal, b, InjectionStatus.QualityControlEvaluated);
+                double? recovery = null;
+                if (b.Quantitation is QuantitationResult q)
+                {
+                    if (nominal.Kind == q.Concentration.Kind)
+                    {
+                        recovery = 100 * q.Concentration.RatioTo(nominal);
+                    }
+                    else
+                    {
+                        b.Notes.Add("Nominal " + nominal + " is of another kind than the calibration (" + q.Concentration.Kind + "); no recovery.");
+                    }
+                }
+
+                bool? passed = window is null ? null : recovery is double p && window.Contains(p);
+                if (passed == false)
+                {
+                    _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
+                }
+
+                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Quantitation?.Concentration, recovery, window, passed, b.Notes.ToList()));
+            }
+
+            return checks;
+        }
+
+        internal List<InjectionOutcome> Outcomes() =>
+            _run.Injections.Select(r =>
+            {
+                RowState st = _rows[r.Order];
+                var statuses = new SortedDictionary<string, InjectionStatus>(StringComparer.Ordinal);
+                foreach (AnalyteMethod a in _method.Analytes)
+                {
+                    statuses[a.Analyte] = st.Statuses.TryGetValue(a.Analyte, out InjectionStatus s) ? s : InjectionStatus.Excluded;
+                }
+
+                return new InjectionOutcome(r, statuses, st.Recoveries.ToList(), st.Reasons.ToList());
+            }).ToList();
+
+        private static DuplicateCheck Duplicate(string analyte, ResultBuilder parent, ResultBuilder dup, RpdLimit? limit)
+        {
+            var notes = new List<string>();
+            Concentration? a = parent.InSample?.Result.Value;
+            Concentration? b = dup.InSample?.Result.Value;
+            double? rpd = null;
+            if (a is Concentration x && b is Concentration y)
+            {
+                if (x.Kind != y.Kind)
+                {
+                    notes.Add("Sample and duplicate results are of different kinds; no RPD.");
+                    b = null;
+                }
+                else
+                {
+                    double yv = y.In(x.Unit);
+                    b = Concentration.From(yv, x.Unit);
+                    double mean = (x.Value + yv) / 2;
+                    if (mean > 0)
+                    {
+                        rpd = 100 * Math.Abs(x.Value - yv) / mean;
+                    }
+                    else
+                    {
+                        notes.Add("Mean of sample and duplicate is ≤ 0; no RPD.");
+                    }
+                }
+            }
+            else
+            {
+                notes.Add("Sample or duplicate has no result in the original sample; no RPD.");
+            }
+
+            bool? passed = limit is null ? null : rpd is double r && r <= limit.MaxPercent;
+            if (passed == false)
+            {
+                string text = "Duplicate RPD " + (rpd is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + limit + ".";
+                dup.Qualifiers |= ResultQualifiers.DuplicateRpdExceeded;
+                dup.Notes.Add(text);
+                parent.Qualifiers |= ResultQualifiers.DuplicateRpdExceeded;
+                parent.Notes.Add(text + " (duplicate '" + dup.Id + "')");
+            }
+
+            return new DuplicateCheck(analyte, parent.Id, dup.Id, a, b, rpd, limit, passed, notes);
+        }
+
+        private static SpikeCheck Spike(string analyte, ResultBuilder parent, ResultBuilder spiked, Concentration added, RecoveryWindow? window)
+        {
+            var notes = new List<string>();
+            Concentration? s = spiked.InSample?.Result.Value;
+            Concentration? u = parent.InSample?.Result.Value;
+            double? recovery = null;
+            if (s is Concentration x && u is Concentration y)
+            {
+                if (x.Kind != y.Kind || x.Kind != added.Kind)
+                {
+                    notes.Add("Spiked, unspiked and added amounts are not all of one kind; no recovery.");
+                    u = null;
+                }
+                else
+                {
+                    double yv = y.In(x.Unit);
+                    u = Concentration.From(yv, x.Unit);
+                    recovery = 100 * (x.Value - yv) / added.In(x.Unit);
+                }
+            }
+            else
+            {
+                notes.Add("Spiked or unspiked sample has no result in the original sample; no recovery.");
+            }
+
+            bool? passed = window is null ? null : recovery is double r && window.Contains(r);
+            if (passed == false)
+            {
+                spiked.Qualifiers |= ResultQualifiers.SpikeRecoveryOutOfWindow;
+                spiked.Notes.Add("Spike recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + ".");
+            }
+
+            return new SpikeCheck(analyte, spiked.Id, parent.Id, s, u, added, recovery, window, passed, notes);
+        }
+
+        private static string OrderText(int order) =>
+            order == int.MinValue ? "start of run" : order == int.MaxValue ? "end of run" : Text.I(order);
+
+        private static string? NonPositive(RunInjection r, AnalyteMethod a) =>
+            r.Signals.Analyte(a.Analyte) is double s && s <= 0 ? "analyte signal " + Text.G(s) + " ≤ 0 (used)." : null;
+
+        private static (Injection? Injection, string? Reason) Signal(RunInjection r, AnalyteMethod a)
+        {
+            double? signal = r.Signals.Analyte(a.Analyte);
+            double? isSignal = r.Signals.InternalStandard(a.InternalStandard);
+            if (signal is null)
+            {
+                return (null, "no analyte signal; set aside.");
+            }
+
+            if (isSignal is null)
+            {
+                return (null, "no signal for IS " + a.InternalStandard + "; set aside.");
+            }
+
+            if (!(isSignal.Value > 0))
+            {
+                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal.Value) + " ≤ 0 is invalid; set aside.");
+            }
+
+            try
+            {
+                return (new Injection(signal.Value, isSignal.Value), null);
+            }
+            catch (ArgumentOutOfRangeException e)
+            {
+                return (null, "signals cannot form a ratio (" + e.Message + "); set aside.");
+            }
+        }
+
+        private static RatioCalibration Fit(AnalyteMethod a, List<CalibrationStandard> standards)
+        {
+            if (standards.Count == 0)
+            {
+                throw new ArgumentException("No valid calibration injection for analyte '" + a.Analyte + "'.", nameof(standards));
+            }
+
+            switch (a.Model)
+            {
+                case RatioModel.SinglePointResponseFactor:
+                    if (standards.Count != 1)
+                    {
+                        throw new ArgumentException("The single-point response-factor model needs exactly one standard level; the run has " + Text.I(standards.Count) + " (" + string.Join(", ", standards.Select(s => s.Label)) + ").", nameof(standards));
+                    }
+
+                    return ResponseFactorCalibration.FitSinglePoint(standards[0], a.Options);
+                case RatioModel.AverageResponseFactor:
+                    return ResponseFactorCalibration.Fit(standards, a.Options);
+                case RatioModel.Linear:
+                    return RegressionCalibration.Fit(standards, CalibrationModel.Linear, a.Weighting, a.Options);
+                case RatioModel.LinearThroughOrigin:
+                    return RegressionCalibration.Fit(standards, CalibrationModel.LinearThroughOrigin, a.Weighting, a.Options);
+                default:
+                    return RegressionCalibration.Fit(standards, CalibrationModel.Quadratic, a.Weighting, a.Options);
+            }
+        }
+
+        private static void ApplyLimits(AnalyteMethod a, ResultBuilder b, QuantitationResult q)
+        {
+            if (a.Limits is not ReportingLimits limits)
+            {
+                return;
+            }
+
+            Concentration c = q.Concentration;
+            if (limits.LimitOfDetection is Concentration lod && c < lod)
+            {
+                b.Qualifiers |= ResultQualifiers.BelowLimitOfDetection;
+                b.Notes.Add("Below the LOD (" + lod + ") in the measured solution; value kept.");
+            }
+            else if (limits.LimitOfQuantitation is Concentration loq && c < loq)
+            {
+                b.Qualifiers |= ResultQualifiers.BelowLimitOfQuantitation;
+                b.Notes.Add("Below the LOQ (" + loq + ") in the measured solution; value kept.");
+            }
+        }
+
+        private static void ToSample(ResultBuilder b, QuantitationResult q)
+        {
+            SamplePreparation prep = b.Rows[0].Preparation;
+            Measured<Concentration> measured = q.AsMeasured() ?? Measured.Exact(q.Concentration);
+            try
+            {
+                b.InSample = prep.ToSample(measured);
+                if (q.Lower is Concentration lo && q.Upper is Concentration hi)
+                {
+                    b.SampleLower = prep.ToSample(Measured.Exact(lo)).Result.Value;
+                    b.SampleUpper = prep.ToSample(Measured.Exact(hi)).Result.Value;
+                }
+
+                b.Notes.Add("Original sample: " + prep + " → " + b.InSample.Result.Value.ToString("G6", null) + ".");
+            }
+            catch (ArgumentException e)
+            {
+                b.Notes.Add("No result in the original sample: the preparation does not fit the measured concentration (" + e.Message + ").");
+            }
+        }
+
+        private static void CheckLimits(AnalyteMethod a, ConcentrationUnit? unit, string paramName)
+        {
+            if (a.Limits is ReportingLimits limits && unit is ConcentrationUnit u)
+            {
+                Concentration l = limits.LimitOfDetection ?? limits.LimitOfQuantitation!.Value;
+                if (l.Kind != Concentration.KindOf(u))
+                {
+                    throw new ArgumentException($"Parameter '{paramName}': the reporting limits of analyte '{a.Analyte}' ({limits}) are of kind {l.Kind}, but its standards are in {Concentration.SymbolOf(u)} ({Concentration.KindOf(u)}).", paramName);
+                }
+            }
+        }
+
+        private void Quantify(AnalyteMethod a, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
+        {
+            var injections = new List<Injection>();
+            var used = new List<RunInjection>();
+            foreach (RunInjection r in b.Rows)
+            {
+                (Injection? inj, string? why) = Signal(r, a);
+                if (inj is null)
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                    b.Qualifiers |= ResultQualifiers.MissingOrInvalidSignal;
+                    b.Notes.Add("Injection " + Text.I(r.Order) + ": " + why);
+                    continue;
+                }
+
+                injections.Add(inj);
+                used.Add(r);
+            }
+
+            if (cal.Calibration is not RatioCalibration calibration)
+            {
+                b.Qualifiers |= ResultQualifiers.NotQuantified;
+                b.Notes.Add("Not quantified: no calibration (" + cal.Failure + ").");
+                foreach (RunInjection r in used)
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
+                }
+
+                return;
+            }
+
+            if (injections.Count == 0)
+            {
+                b.Qualifiers |= ResultQualifiers.NotQuantified;
+                b.Notes.Add("Not quantified: no valid injection.");
+                return;
+            }
+
+            Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
+            try
+            {
+                b.Quantitation = SampleQuantitation.Quantify(calibration, UnknownSample.Create(b.Id, cIs, injections.ToArray()), _method.ConfidenceLevel, _method.IntervalMethod);
+            }
+            catch (Exception e) when (e is ArgumentException or InvalidOperationException)
+            {
+                b.Qualifiers |= ResultQualifiers.NotQuantified;
+                b.Notes.Add("Not quantified: " + e.Message);
+                foreach (RunInjection r in used)
+                {
+                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
+                }
+
+                return;
+            }
+
+            b.Notes.Add("Injections used: " + string.Join(", ", used.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(b.Quantitation.MeanResponse) + " → " + b.Quantitation.Concentration.ToString("G6", null) + " in the measured solution.");
+            if (b.Quantitation.IsExtrapolated)
+            {
+                b.Qualifiers |= ResultQualifiers.Extrapolated;
+            }
+
+            if (!cal.IsAccepted)
+            {
+                b.Qualifiers |= ResultQualifiers.CalibrationRejected;
+                b.Notes.Add("The calibration failed " + cal.Verdict!.RuleSet.Name + ".");
+            }
+
+            foreach (RunInjection r in used)
+            {
+                _rows[r.Order].Set(a.Analyte, success, NonPositive(r, a));
+                if (r.Signals.Analyte(a.Analyte) <= 0)
+                {
+                    b.Qualifiers |= ResultQualifiers.NonPositiveAnalyteSignal;
+                }
+
+                if (_rows[r.Order].Recoveries.FirstOrDefault(x => x.InternalStandard == a.InternalStandard) is { WithinWindow: false } rec)
+                {
+                    b.Qualifiers |= ResultQualifiers.InternalStandardRecoveryOutOfWindow;
+                    b.Notes.Add("Injection " + Text.I(r.Order) + ": IS " + a.InternalStandard + " recovery " + Text.F(rec.RecoveryPercent!.Value, 1) + " % outside " + _method.RecoveryWindow + ".");
+                }
+            }
+        }
+    }
+}
