@@ -23,6 +23,10 @@ internal struct Xoshiro256StarStar
         s3 = SplitMix64(ref x);
     }
 
+    /// <summary>A generator in a given state (not all zero), for checking against published output.</summary>
+    internal static Xoshiro256StarStar FromState(ulong a, ulong b, ulong c, ulong d) =>
+        new() { s0 = a, s1 = b, s2 = c, s3 = d };
+
     /// <summary>The next 64 random bits.</summary>
     internal ulong NextUInt64()
     {

@@ -40,7 +40,14 @@ public sealed class MeasurementModel
         Correlations = correlations;
         this.correlation = correlation;
         this.index = index;
-        Value = Evaluate(InputValues(), "the input values");
+        try
+        {
+            Value = Evaluate(InputValues(), "the input values");
+        }
+        catch (InvalidOperationException e)
+        {
+            throw new ArgumentException(e.Message, function is null ? nameof(inputs) : nameof(function), e);
+        }
     }
 
     /// <summary>Name of the output quantity y.</summary>
@@ -108,7 +115,7 @@ public sealed class MeasurementModel
     /// ½ are evaluated with ×, ÷ and √ (bit-reproducible everywhere); other exponents use Math.Pow.</remarks>
     /// <exception cref="ArgumentNullException">A required argument or an input is null.</exception>
     /// <exception cref="ArgumentException">No inputs; duplicate names; lengths differ; a bad correlation; an input is
-    /// zero with a negative exponent, or negative with a non-integer exponent.</exception>
+    /// zero with a negative exponent, or negative with a non-integer exponent; or y overflows.</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="constant"/> or an exponent is zero or not finite.</exception>
     public static MeasurementModel Product(string outputName, string? outputUnit, double constant, IReadOnlyList<UncertainInput> inputs, IReadOnlyList<double> exponents, IReadOnlyList<InputCorrelation>? correlations = null)
     {
