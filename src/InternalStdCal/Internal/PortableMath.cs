@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 
 namespace InternalStdCal.Internal;
 
@@ -13,44 +14,6 @@ internal static class PortableMath
     private const double Ln2Lo = 1.90821492927058770002e-10;
     private const double InvLn2 = 1.44269504088896338700e+00;
     private static readonly double Sqrt2 = Math.Sqrt(2);
-    private static readonly double[] InverseFactorials = BuildInverseFactorials(17);
-
-    // AS 241 (PPND16) coefficients, constant term first.
-    private static readonly double[] A =
-    {
-        3.3871328727963666080e0, 1.3314166789178437745e2, 1.9715909503065514427e3, 1.3731693765509461125e4,
-        4.5921953931549871457e4, 6.7265770927008700853e4, 3.3430575583588128105e4, 2.5090809287301226727e3,
-    };
-
-    private static readonly double[] B =
-    {
-        1.0, 4.2313330701600911252e1, 6.8718700749205790830e2, 5.3941960214247511077e3,
-        2.1213794301586595867e4, 3.9307895800092710610e4, 2.8729085735721942674e4, 5.2264952788528545610e3,
-    };
-
-    private static readonly double[] C =
-    {
-        1.42343711074968357734e0, 4.63033784615654529590e0, 5.76949722146069140550e0, 3.64784832476320460504e0,
-        1.27045825245236838258e0, 2.41780725177450611770e-1, 2.27238449892691845833e-2, 7.74545014278341407640e-4,
-    };
-
-    private static readonly double[] D =
-    {
-        1.0, 2.05319162663775882187e0, 1.67638483018380384940e0, 6.89767334985100004550e-1,
-        1.48103976427480074590e-1, 1.51986665636164571966e-2, 5.47593808499534494600e-4, 1.05075007164441684324e-9,
-    };
-
-    private static readonly double[] E =
-    {
-        6.65790464350110377720e0, 5.46378491116411436990e0, 1.78482653991729133580e0, 2.96560571828504891230e-1,
-        2.65321895265761230930e-2, 1.24266094738807843860e-3, 2.71155556874348757815e-5, 2.01033439929228813265e-7,
-    };
-
-    private static readonly double[] F =
-    {
-        1.0, 5.99832206555887937690e-1, 1.36929880922735805310e-1, 1.48753612908506148525e-2,
-        7.86869131145613259100e-4, 1.84631831751005468180e-5, 1.42151175831644588870e-7, 2.04426310338993978564e-15,
-    };
 
     /// <summary>ln x for finite x &gt; 0 (normal or subnormal).</summary>
     internal static double Log(double x)
@@ -94,16 +57,11 @@ internal static class PortableMath
     /// <summary>eˣ for finite x with |x| ≤ 700.</summary>
     internal static double Exp(double x)
     {
-        // x = k·ln 2 + r, |r| ≤ ½ ln 2; e^r by its Taylor series to r¹⁷/17! (&lt; 1e-19 relative).
+        // x = k·ln 2 + r, |r| ≤ ½ ln 2; e^r by its Taylor series to r¹³/13! (next term &lt; 5e-18).
         double kd = Math.Floor((x * InvLn2) + 0.5);
         double r = (x - (kd * Ln2Hi)) - (kd * Ln2Lo);
-        double p = InverseFactorials[17];
-        for (int n = 16; n >= 1; n--)
-        {
-            p = (p * r) + InverseFactorials[n];
-        }
-
-        double er = (p * r) + 1;
+        double h = Poly7(r, 1.0 / 720, 1.0 / 5040, 1.0 / 40320, 1.0 / 362880, 1.0 / 3628800, 1.0 / 39916800, 1.0 / 479001600, 1.0 / 6227020800);
+        double er = 1 + (r * (1 + (r * (0.5 + (r * ((1.0 / 6) + (r * ((1.0 / 24) + (r * ((1.0 / 120) + (r * h)))))))))));
         int k = (int)kd;
         return er * BitConverter.Int64BitsToDouble((long)(k + 1023) << 52);
     }
@@ -118,38 +76,30 @@ internal static class PortableMath
         if (Math.Abs(q) <= 0.425)
         {
             double r = 0.180625 - (q * q);
-            return q * Horner(A, r) / Horner(B, r);
+            return q * Poly7(r, 3.3871328727963666080e0, 1.3314166789178437745e2, 1.9715909503065514427e3, 1.3731693765509461125e4, 4.5921953931549871457e4, 6.7265770927008700853e4, 3.3430575583588128105e4, 2.5090809287301226727e3)
+                / Poly7(r, 1.0, 4.2313330701600911252e1, 6.8718700749205790830e2, 5.3941960214247511077e3, 2.1213794301586595867e4, 3.9307895800092710610e4, 2.8729085735721942674e4, 5.2264952788528545610e3);
         }
 
         double t = Math.Sqrt(-Log(q < 0 ? p : 1 - p));
-        double value = t <= 5
-            ? Horner(C, t - 1.6) / Horner(D, t - 1.6)
-            : Horner(E, t - 5) / Horner(F, t - 5);
+        double value;
+        if (t <= 5)
+        {
+            t -= 1.6;
+            value = Poly7(t, 1.42343711074968357734e0, 4.63033784615654529590e0, 5.76949722146069140550e0, 3.64784832476320460504e0, 1.27045825245236838258e0, 2.41780725177450611770e-1, 2.27238449892691845833e-2, 7.74545014278341407640e-4)
+                / Poly7(t, 1.0, 2.05319162663775882187e0, 1.67638483018380384940e0, 6.89767334985100004550e-1, 1.48103976427480074590e-1, 1.51986665636164571966e-2, 5.47593808499534494600e-4, 1.05075007164441684324e-9);
+        }
+        else
+        {
+            t -= 5;
+            value = Poly7(t, 6.65790464350110377720e0, 5.46378491116411436990e0, 1.78482653991729133580e0, 2.96560571828504891230e-1, 2.65321895265761230930e-2, 1.24266094738807843860e-3, 2.71155556874348757815e-5, 2.01033439929228813265e-7)
+                / Poly7(t, 1.0, 5.99832206555887937690e-1, 1.36929880922735805310e-1, 1.48753612908506148525e-2, 7.86869131145613259100e-4, 1.84631831751005468180e-5, 1.42151175831644588870e-7, 2.04426310338993978564e-15);
+        }
+
         return q < 0 ? -value : value;
     }
 
-    /// <summary>Σ c[i]·xⁱ by Horner's rule, c[0] the constant term.</summary>
-    private static double Horner(double[] c, double x)
-    {
-        double v = c[c.Length - 1];
-        for (int i = c.Length - 2; i >= 0; i--)
-        {
-            v = (v * x) + c[i];
-        }
-
-        return v;
-    }
-
-    private static double[] BuildInverseFactorials(int n)
-    {
-        var c = new double[n + 1];
-        double factorial = 1; // exact up to 18!
-        for (int i = 0; i <= n; i++)
-        {
-            factorial *= Math.Max(i, 1);
-            c[i] = 1 / factorial;
-        }
-
-        return c;
-    }
+    /// <summary>c₀ + c₁x + … + c₇x⁷ by Horner's rule (inlined so the constants fold).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double Poly7(double x, double c0, double c1, double c2, double c3, double c4, double c5, double c6, double c7) =>
+        c0 + (x * (c1 + (x * (c2 + (x * (c3 + (x * (c4 + (x * (c5 + (x * (c6 + (x * c7)))))))))))));
 }

@@ -19,8 +19,12 @@ namespace InternalStdCal.Uncertainty;
 /// compared with the numerical tolerance δ of u(y) from all hM values; it stops when twice each is ≤ δ, or at the trial
 /// cap (then <see cref="Converged"/> is false). The result pools all hM values. Clause details are from memory of
 /// JCGM 101:2008.</para>
-/// <para>Random numbers and sampling: see the remarks on xoshiro256** sampling in the library documentation; a seed gives the
-/// same result bit for bit on every run and target framework. Immutable; reference equality.</para>
+/// <para>Sampling: one xoshiro256** stream (Blackman &amp; Vigna) seeded from <see cref="Seed"/> by SplitMix64; normal
+/// deviates by Wichura's AS 241 quantile, correlated normal inputs through the Cholesky factor of their correlation
+/// matrix, rectangular x + a(2U − 1), triangular x + a(U₁ + U₂ − 1), Student t by Bailey's polar method (Math. Comp. 62
+/// (1994) 779–781). Logarithms and exponentials are computed from IEEE-exact operations only, so a seed gives the
+/// same result bit for bit on every run, platform and target framework, provided the model function itself does.
+/// Immutable; reference equality.</para>
 /// </remarks>
 public sealed class MonteCarloEvaluation
 {
