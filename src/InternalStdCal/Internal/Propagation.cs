@@ -10,7 +10,7 @@ namespace InternalStdCal.Internal;
 /// </summary>
 internal static class Propagation
 {
-    /// <summary>Degrees of freedom above which the coverage factor is the normal quantile (t − z &lt; 3e-6·z there).</summary>
+    /// <summary>Degrees of freedom above which the coverage factor is the normal quantile (there (t − z)/z &lt; 1.3e-6 at p = 0.95).</summary>
     internal const double NormalLimit = 1e6;
 
     /// <summary>√Σ cᵢ², scaled by the largest |cᵢ| so that squares neither overflow nor underflow.</summary>
