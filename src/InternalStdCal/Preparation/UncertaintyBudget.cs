@@ -1,8 +1,8 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
-using System.Linq;
 using System.Text;
+using InternalStdCal.Internal;
 using InternalStdCal.Quantities;
 
 namespace InternalStdCal.Preparation;
@@ -61,7 +61,7 @@ public sealed class UncertaintyBudget
     /// <summary>Builds a budget from contributions uᵢ(y) already in the unit of the result.</summary>
     internal static UncertaintyBudget Create(Concentration result, IReadOnlyList<BudgetTerm> terms, IReadOnlyList<double> contributions)
     {
-        double combined = RootSumSquares(contributions);
+        double combined = Propagation.RootSumSquares(contributions);
         double? nu = WelchSatterthwaite(terms, contributions, combined);
         var rows = new UncertaintyContribution[terms.Count];
         for (int i = 0; i < rows.Length; i++)
@@ -112,43 +112,15 @@ public sealed class UncertaintyBudget
 
     private static double Square(double x) => x * x;
 
-    // Scaled by the largest term so that squares neither overflow nor underflow.
-    private static double RootSumSquares(IReadOnlyList<double> values)
-    {
-        double max = values.Count == 0 ? 0 : values.Max();
-        if (max == 0)
-        {
-            return 0;
-        }
-
-        double sum = 0;
-        foreach (double v in values)
-        {
-            sum += Square(v / max);
-        }
-
-        return max * Math.Sqrt(sum);
-    }
-
     private static double? WelchSatterthwaite(IReadOnlyList<BudgetTerm> terms, IReadOnlyList<double> contributions, double combined)
     {
-        if (combined == 0)
+        var nu = new double[terms.Count];
+        for (int i = 0; i < nu.Length; i++)
         {
-            return null;
+            nu[i] = terms[i].DegreesOfFreedom ?? double.PositiveInfinity;
         }
 
-        double denominator = 0;
-        double smallest = double.PositiveInfinity;
-        for (int i = 0; i < terms.Count; i++)
-        {
-            if (terms[i].DegreesOfFreedom is double nu && contributions[i] > 0)
-            {
-                denominator += Square(Square(contributions[i] / combined)) / nu;
-                smallest = Math.Min(smallest, nu);
-            }
-        }
-
-        // ν_eff ≥ min νᵢ holds exactly; the bound only absorbs rounding (e.g. a single dominant term with ν = 1).
-        return denominator > 0 ? Math.Max(1 / denominator, smallest) : null;
+        double effective = Propagation.WelchSatterthwaite(contributions, nu, combined);
+        return double.IsPositiveInfinity(effective) ? null : effective;
     }
 }
