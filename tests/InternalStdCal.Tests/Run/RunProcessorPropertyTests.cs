@@ -43,7 +43,8 @@ public class RunProcessorPropertyTests
             }
 
             RunReport report = RunProcessor.Process(RunScenario.Run(permuted), RunScenario.Method());
-            return Values(report).Zip(Values(Reference), Close).All(x => x);
+            return Values(report).Zip(Values(Reference), Close).All(x => x) && Reported(report).SequenceEqual(Reported(Reference))
+                && report.Drift.Count == Reference.Drift.Count;
         });
 
     [Property(MaxTest = 50)]
@@ -55,8 +56,12 @@ public class RunProcessorPropertyTests
             bool concentrations = Values(report).Zip(Values(Reference), Close).All(x => x);
             bool recoveries = report.Injections.SelectMany(o => o.InternalStandardRecoveries.Select(x => x.RecoveryPercent ?? -1))
                 .Zip(Reference.Injections.SelectMany(o => o.InternalStandardRecoveries.Select(x => x.RecoveryPercent ?? -1)), Close).All(x => x);
-            return concentrations && recoveries
-                && report.Results.Select(r => r.Qualifiers).SequenceEqual(Reference.Results.Select(r => r.Qualifiers));
+            // Drift in % of the series mean is scale-free, so the IS trends and every flag stay the same.
+            bool drift = report.Drift.Select(d => d.Trend?.DriftOverRunPercent ?? -1).Zip(Reference.Drift.Select(d => d.Trend?.DriftOverRunPercent ?? -1), Close).All(x => x)
+                && report.Drift.Select(d => d.IsFlagged).SequenceEqual(Reference.Drift.Select(d => d.IsFlagged));
+            return concentrations && recoveries && drift
+                && report.Results.Select(r => r.Qualifiers).SequenceEqual(Reference.Results.Select(r => r.Qualifiers))
+                && Reported(report).SequenceEqual(Reported(Reference));
         });
 
     [Property(MaxTest = 100)]
@@ -123,9 +128,16 @@ public class RunProcessorPropertyTests
     }
 
     private static IEnumerable<string> Summary(RunReport report) =>
-        report.Results.Select(r => r.SampleId + "|" + r.Analyte + "|" + (r.InMeasuredSolution?.Value.ToString("R", null) ?? "-") + "|" + (r.InSample?.Value.Value.ToString("R", null) ?? "-") + "|" + r.Qualifiers)
+        report.Results.Select(r => r.SampleId + "|" + r.Analyte + "|" + (r.InMeasuredSolution?.Value.ToString("R", null) ?? "-") + "|" + (r.InSample?.Value.Value.ToString("R", null) ?? "-") + "|" + r.Reported + "|" + r.Qualifiers)
             .Concat(report.QualityControl.Select(c => c.Injection.Order + "|" + c.Analyte + "|" + c.RecoveryPercent?.ToString("R", null)))
-            .Concat(report.Injections.Select(o => o.Injection.Order + "|" + o.Status + "|" + string.Join(";", o.Reasons)));
+            .Concat(report.Injections.Select(o => o.Injection.Order + "|" + o.Status + "|" + string.Join(";", o.Reasons)))
+            .Concat(report.Drift.Select(d => d + "|" + string.Join(",", d.InjectionOrders) + "|" + d.Trend?.Slope.ToString("R", null) + "|" + d.IsFlagged))
+            .Concat(report.Notes);
+
+    // Reported status of every result by id and analyte ("-" without a reported value).
+    private static IEnumerable<string> Reported(RunReport report) =>
+        report.Results.OrderBy(r => r.SampleId, StringComparer.Ordinal).ThenBy(r => r.Analyte, StringComparer.Ordinal)
+            .Select(r => r.Reported?.Status.ToString() ?? "-");
 
     // Every concentration of the report in a fixed order (results by id and analyte, then QC by id and nominal); −1 for none.
     private static IEnumerable<double> Values(RunReport report) =>
