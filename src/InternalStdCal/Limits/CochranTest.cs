@@ -86,7 +86,7 @@ public static class CochranTest
     public static CochranClassification Classify(IReadOnlyList<double> variances, int replicatesPerGroup) =>
         new(Evaluate(variances, replicatesPerGroup, 0.05), Evaluate(variances, replicatesPerGroup, 0.01));
 
-    private static CochranTestResult Compute(IReadOnlyList<double> variances, int n, double alpha, IReadOnlyList<IReadOnlyList<double>>? groups)
+    private static CochranTestResult Compute(ReadOnlyCollection<double> variances, int n, double alpha, IReadOnlyList<IReadOnlyList<double>>? groups)
     {
         int p = variances.Count;
         double critical = CriticalValue(p, n, alpha);
