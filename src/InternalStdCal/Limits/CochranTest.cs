@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Collections.ObjectModel;
+using System.Linq;
 using InternalStdCal.Internal;
 
 namespace InternalStdCal.Limits;
@@ -30,8 +31,8 @@ public static class CochranTest
     /// or ±∞ (group, index and value named); <paramref name="alpha"/> outside (0, 0.5).</exception>
     public static CochranTestResult Evaluate(IReadOnlyList<IReadOnlyList<double>> groups, double alpha)
     {
-        (IReadOnlyList<IReadOnlyList<double>> copy, double[] variances) = Groups(groups, nameof(groups));
-        return Compute(Array.AsReadOnly(variances), copy[0].Count, alpha, copy);
+        (IReadOnlyList<IReadOnlyList<double>> copy, double[] variances, double[] scaledVariances) = Groups(groups, nameof(groups));
+        return Compute(Array.AsReadOnly(variances), scaledVariances, copy[0].Count, alpha, copy);
     }
 
     /// <summary>Tests variances given directly, each from the same number of replicates.</summary>
@@ -46,7 +47,7 @@ public static class CochranTest
     {
         ReadOnlyCollection<double> v = Variances(variances, nameof(variances));
         Guard.AtLeast(replicatesPerGroup, 2, nameof(replicatesPerGroup));
-        return Compute(v, replicatesPerGroup, alpha, null);
+        return Compute(v, v, replicatesPerGroup, alpha, null);
     }
 
     /// <summary>Critical value C_crit = 1/(1 + (p − 1)/F(1 − α/p; n − 1, (p − 1)(n − 1))), e.g. 0.8413 for p = 5,
@@ -86,27 +87,29 @@ public static class CochranTest
     public static CochranClassification Classify(IReadOnlyList<double> variances, int replicatesPerGroup) =>
         new(Evaluate(variances, replicatesPerGroup, 0.05), Evaluate(variances, replicatesPerGroup, 0.01));
 
-    private static CochranTestResult Compute(ReadOnlyCollection<double> variances, int n, double alpha, IReadOnlyList<IReadOnlyList<double>>? groups)
+    // variances: reported; scaled: the same times one common positive factor (kept in range), used for C.
+    private static CochranTestResult Compute(ReadOnlyCollection<double> variances, IReadOnlyList<double> scaled, int n, double alpha, IReadOnlyList<IReadOnlyList<double>>? groups)
     {
         int p = variances.Count;
         double critical = CriticalValue(p, n, alpha);
-        int largest = OutlierInput.IndexOfExtreme(variances, highest: true);
-        var sum = default(CompensatedSum);
-        for (int i = 0; i < p; i++)
-        {
-            sum.Add(variances[i]);
-        }
-
+        int largest = OutlierInput.IndexOfExtreme(scaled, highest: true);
         var notes = new List<string>();
         double c;
-        if (variances[largest] == 0)
+        if (scaled[largest] == 0)
         {
             notes.Add("All variances are 0: C is defined as 1/p (the value for equal variances) and no group is flagged.");
             c = 1.0 / p;
         }
         else
         {
-            c = variances[largest] / sum.Value;
+            // C = 1/Σ(s²ᵢ/s²_max): every term is in [0, 1], so the sum cannot overflow.
+            var sum = default(CompensatedSum);
+            for (int i = 0; i < p; i++)
+            {
+                sum.Add(scaled[i] / scaled[largest]);
+            }
+
+            c = 1 / sum.Value;
         }
 
         return new CochranTestResult(groups, variances, n, c, critical, alpha, largest, notes);
@@ -130,7 +133,8 @@ public static class CochranTest
         return v;
     }
 
-    private static (IReadOnlyList<IReadOnlyList<double>> Copy, double[] Variances) Groups(IReadOnlyList<IReadOnlyList<double>>? groups, string paramName)
+    /// <summary>Validated copy, variances, and variances of the data divided by one common power of two (for C).</summary>
+    private static (IReadOnlyList<IReadOnlyList<double>> Copy, double[] Variances, double[] ScaledVariances) Groups(IReadOnlyList<IReadOnlyList<double>>? groups, string paramName)
     {
         Guard.NotNull(groups, paramName);
         if (groups!.Count < 2)
@@ -141,8 +145,7 @@ public static class CochranTest
                 FormattableString.Invariant($"Parameter '{paramName}' has {groups.Count} groups; Cochran's test needs at least 2."));
         }
 
-        var copy = new IReadOnlyList<double>[groups.Count];
-        double[] variances = new double[groups.Count];
+        var copy = new ReadOnlyCollection<double>[groups.Count];
         for (int g = 0; g < groups.Count; g++)
         {
             string name = FormattableString.Invariant($"{paramName}[{g}]");
@@ -156,10 +159,26 @@ public static class CochranTest
             }
 
             copy[g] = group;
-            (_, double sumOfSquares) = OutlierInput.MeanAndSumOfSquares(group);
-            variances[g] = sumOfSquares / (group.Count - 1);
         }
 
-        return (Array.AsReadOnly(copy), variances);
+        (double[] all, double scale) = OutlierInput.ScaledByPowerOfTwo(copy.SelectMany(c => c).ToArray());
+        int n = copy[0].Count;
+        double[] variances = new double[copy.Length];
+        double[] scaledVariances = new double[copy.Length];
+        for (int g = 0; g < copy.Length; g++)
+        {
+            (_, double sumOfSquares) = OutlierInput.MeanAndSumOfSquares(new ArraySegment<double>(all, g * n, n));
+            scaledVariances[g] = sumOfSquares / (n - 1);
+            variances[g] = scaledVariances[g] * scale * scale;
+            if (double.IsInfinity(variances[g]))
+            {
+                string name = FormattableString.Invariant($"{paramName}[{g}]");
+                throw new ArgumentOutOfRangeException(
+                    name,
+                    FormattableString.Invariant($"Parameter '{name}' has a variance beyond the range of a double; express the data in a larger unit."));
+            }
+        }
+
+        return (Array.AsReadOnly(copy), variances, scaledVariances);
     }
 }

@@ -58,7 +58,7 @@ public static class DixonQTest
         OutlierInput.Count(x, 3, 10, nameof(values), "Dixon's r10 test with the Rorabacher table");
         double critical = CriticalValue(x.Count, alpha);
 
-        double[] sorted = x.OrderBy(v => v).ToArray();
+        double[] sorted = OutlierInput.ScaledByPowerOfTwo(x).Scaled.OrderBy(v => v).ToArray();
         int n = sorted.Length;
         int high = OutlierInput.IndexOfExtreme(x, highest: true);
         int low = OutlierInput.IndexOfExtreme(x, highest: false);

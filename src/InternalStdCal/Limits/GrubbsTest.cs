@@ -45,10 +45,11 @@ public static class GrubbsTest
             return Result(x, 0, critical, alpha, alternative, alternative == OutlierSide.Low ? low : high, alternative == OutlierSide.Low ? OutlierSide.Low : OutlierSide.High, notes);
         }
 
-        (double mean, double sumOfSquares) = OutlierInput.MeanAndSumOfSquares(x);
+        (double[] y, _) = OutlierInput.ScaledByPowerOfTwo(x);
+        (double mean, double sumOfSquares) = OutlierInput.MeanAndSumOfSquares(y);
         double s = Math.Sqrt(sumOfSquares / (n - 1));
-        double gHigh = (x[high] - mean) / s;
-        double gLow = (mean - x[low]) / s;
+        double gHigh = (y[high] - mean) / s;
+        double gLow = (mean - y[low]) / s;
         switch (alternative)
         {
             case OutlierSide.High:

@@ -56,6 +56,42 @@ internal static class OutlierInput
             ? side
             : throw new ArgumentOutOfRangeException(paramName, side, $"Parameter '{paramName}' was {side}; it must be TwoSided, High or Low.");
 
+    /// <summary>
+    /// The values divided by the power of two 2^k ≥ max|xᵢ| (exact except in the subnormal range), so that sums,
+    /// differences and squares of the scaled values neither overflow nor underflow. The tests' statistics are
+    /// scale-free, so they are computed on these.
+    /// </summary>
+    internal static (double[] Scaled, double Scale) ScaledByPowerOfTwo(IReadOnlyList<double> values)
+    {
+        double maxAbs = 0;
+        for (int i = 0; i < values.Count; i++)
+        {
+            maxAbs = Math.Max(maxAbs, Math.Abs(values[i]));
+        }
+
+        double scale = 1;
+        if (maxAbs > 0)
+        {
+            while (scale < maxAbs)
+            {
+                scale *= 2;
+            }
+
+            while (scale / 2 >= maxAbs)
+            {
+                scale /= 2;
+            }
+        }
+
+        double[] scaled = new double[values.Count];
+        for (int i = 0; i < scaled.Length; i++)
+        {
+            scaled[i] = values[i] / scale;
+        }
+
+        return (scaled, scale);
+    }
+
     /// <summary>Mean (compensated sum) and centred sum of squares Σ(x − x̄)².</summary>
     internal static (double Mean, double SumOfSquares) MeanAndSumOfSquares(IReadOnlyList<double> values)
     {

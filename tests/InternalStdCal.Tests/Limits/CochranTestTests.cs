@@ -144,6 +144,33 @@ public class CochranTestTests
         Assert.Single(r.Notes);
     }
 
+    // Scale-free statistic: tiny data whose variances are far below 1e-300 give the same C.
+    [Fact]
+    public void Evaluate_TinyData_SameStatistic()
+    {
+        CochranTestResult r = CochranTest.Evaluate(Groups.Select(g => g.Select(v => v * 1e-200).ToArray()).ToArray(), 0.01);
+
+        Numeric.AssertRelative(1 / 1.03, r.Statistic, 1e-9);
+        Assert.Equal(3, r.SuspectIndex);
+    }
+
+    [Fact]
+    public void Evaluate_VarianceBeyondDouble_ThrowsNamingGroup()
+    {
+        var e = Assert.Throws<ArgumentOutOfRangeException>(() => CochranTest.Evaluate(Groups.Select(g => g.Select(v => v * 1e200).ToArray()).ToArray(), 0.05));
+        Assert.Equal("groups[0]", e.ParamName);
+    }
+
+    // Variances near double.MaxValue: their sum would overflow; C is still defined.
+    [Fact]
+    public void Evaluate_HugeVariances_StillDefined()
+    {
+        CochranTestResult r = CochranTest.Evaluate([1e308, 1e308, 1e308], 2, 0.05);
+
+        Assert.Equal(1.0 / 3, r.Statistic, 1e-15);
+        Assert.False(r.IsOutlier);
+    }
+
     [Fact]
     public void ToString_Flagged_NamesGroupAndSource()
     {

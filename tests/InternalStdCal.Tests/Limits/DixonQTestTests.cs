@@ -140,6 +140,16 @@ public class DixonQTestTests
         Assert.True(r.IsOutlier);
     }
 
+    // The range max − min of ±1.5e308 overflows a double; Q is still defined: (1.5e308 − 1e307)/3e308.
+    [Fact]
+    public void Evaluate_RangeBeyondDouble_StillDefined()
+    {
+        OutlierTestResult r = DixonQTest.Evaluate([-1.5e308, 0, 1e307, 1.5e308], 0.05);
+
+        Assert.Equal((1.5 - 0.1) / 3, r.Statistic, 1e-14);
+        Assert.Equal(OutlierSide.High, r.SuspectEnd);
+    }
+
     [Fact]
     public void ToString_StatesConventionAndSource()
     {

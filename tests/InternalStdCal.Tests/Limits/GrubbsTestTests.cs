@@ -141,6 +141,18 @@ public class GrubbsTestTests
         Assert.Single(r.Notes);
     }
 
+    // Scale-free statistic: the same G for data near the ends of the double range (no overflow or underflow).
+    [Theory]
+    [InlineData(1e300)]
+    [InlineData(1e-300)]
+    public void Evaluate_ExtremeMagnitudes_SameStatistic(double factor)
+    {
+        OutlierTestResult r = GrubbsTest.Evaluate(TietjenMoore.Select(v => v * factor).ToArray(), 0.05, OutlierSide.TwoSided);
+
+        Numeric.AssertRelative(GrubbsTest.Evaluate(TietjenMoore, 0.05, OutlierSide.TwoSided).Statistic, r.Statistic, 1e-12);
+        Assert.Equal(7, r.SuspectIndex);
+    }
+
     [Fact]
     public void Evaluate_InputArrayChangedAfterwards_ResultKeepsOriginalValues()
     {
