@@ -94,6 +94,7 @@ public sealed class AnalyteMethod
 public sealed class RunMethod
 {
     private readonly double _confidenceLevel = 0.95;
+    private readonly double _replicateOutlierSignificance = 0.05;
     private readonly InverseIntervalMethod _intervalMethod;
 
     /// <summary>Creates a method.</summary>
@@ -178,6 +179,16 @@ public sealed class RunMethod
     /// <summary>Rule for the drift trends of the report (each IS signal and each analyte's QC recovery across injection
     /// order, see <see cref="RunReport.Drift"/>); null (default) = no drift trends.</summary>
     public DriftRule? Drift { get; init; }
+
+    /// <summary>Significance level α of the two-sided Grubbs test on the replicate injections of a sample (applied when
+    /// at least 3 injections are used; their ratios are tested, see <see cref="GrubbsTest"/>), in (0, 0.5).
+    /// Default 0.05. A suspect injection is flagged (<see cref="ResultQualifiers.SuspectReplicate"/>), never removed.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">Not in (0, 0.5).</exception>
+    public double ReplicateOutlierSignificance
+    {
+        get => _replicateOutlierSignificance;
+        init => _replicateOutlierSignificance = Guard.InOpenRange(value, 0, 0.5, nameof(ReplicateOutlierSignificance));
+    }
 
     /// <summary>Confidence level of result intervals, in (0, 1). Default 0.95.</summary>
     /// <exception cref="ArgumentOutOfRangeException">Not in (0, 1).</exception>

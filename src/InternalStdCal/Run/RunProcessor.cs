@@ -28,6 +28,9 @@ namespace InternalStdCal.Run;
 /// <para><b>Brackets.</b> A failed quality-control check flags every sample injected between the previous and the next
 /// quality-control injection of the run with a nominal value of that analyte (common practice); a check that applies
 /// but cannot be computed counts as failed.</para>
+/// <para><b>Replicates.</b> With at least 3 injections of a sample used, the two-sided Grubbs test
+/// (<see cref="GrubbsTest"/>, α = <see cref="RunMethod.ReplicateOutlierSignificance"/>) is applied to their ratios; a
+/// suspect injection is flagged (<see cref="ResultQualifiers.SuspectReplicate"/>) and stays in the mean.</para>
 /// <para><b>Limits.</b> An analyte's <see cref="AnalyteMethod.Limits"/> are its LOD/LOQ in the original sample (common
 /// practice) and judge <see cref="AnalyteResult.InSample"/>, giving <see cref="AnalyteResult.Reported"/> and the
 /// below-LOD/LOQ flags; limits of another kind than a sample's result are not applied to it (noted on the result).</para>
@@ -675,6 +678,28 @@ public static class RunProcessor
             }
         }
 
+        // Grubbs' test on the ratios of ≥ 3 replicate injections: flags a suspect one, which stays in the mean.
+        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, List<RunInjection> used)
+        {
+            if (injections.Count < 3)
+            {
+                return;
+            }
+
+            OutlierTestResult g = GrubbsTest.Evaluate(injections.Select(i => i.Ratio).ToArray(), _method.ReplicateOutlierSignificance, OutlierSide.TwoSided);
+            if (!g.IsOutlier)
+            {
+                return;
+            }
+
+            RunInjection suspect = used[g.SuspectIndex];
+            string text = "ratio " + Text.G(g.SuspectValue) + " is a suspect outlier by Grubbs' test (G = " + Text.G(g.Statistic) + " > " + Text.G(g.CriticalValue)
+                + ", n = " + Text.I(injections.Count) + ", two-sided α = " + Text.G(g.SignificanceLevel) + "); kept in the mean.";
+            b.Qualifiers |= ResultQualifiers.SuspectReplicate;
+            b.Notes.Add("Injection " + Text.I(suspect.Order) + ": " + text);
+            _rows[suspect.Order].Reasons.Add(a.Analyte + ": " + text);
+        }
+
         private void Quantify(AnalyteMethod a, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
         {
             var injections = new List<Injection>();
@@ -742,6 +767,7 @@ public static class RunProcessor
                 b.Notes.Add("The calibration failed " + cal.Verdict!.RuleSet.Name + ".");
             }
 
+            Outlier(a, b, injections, used);
             foreach (RunInjection r in used)
             {
                 _rows[r.Order].Set(a.Analyte, success, NonPositive(r, a));

@@ -139,6 +139,7 @@ public sealed class RunReport
         Add(ResultQualifiers.NonPositiveAnalyteSignal, "signal ≤ 0");
         Add(ResultQualifiers.DuplicateRpdExceeded, "RPD");
         Add(ResultQualifiers.SpikeRecoveryOutOfWindow, "spike recovery");
+        Add(ResultQualifiers.SuspectReplicate, "suspect replicate");
         return parts.Count == 0 ? "-" : string.Join(", ", parts);
     }
 

@@ -4,6 +4,7 @@ using System.Linq;
 using FsCheck;
 using FsCheck.Fluent;
 using FsCheck.Xunit;
+using InternalStdCal.Limits;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
 
@@ -100,6 +101,31 @@ public class RunProcessorPropertyTests
                 .All(r => r.Has(ResultQualifiers.MissingOrInvalidSignal));
             bool everySample = report.Results.Count == Reference.Results.Count;
             return everyRow && damagedExcluded && damagedSamplesFlagged && everySample;
+        });
+
+    [Property(MaxTest = 50)]
+    public Property Process_ReplicateOutlierFlag_NeverRemovesAnInjectionAndIgnoresIsScale() =>
+        Prop.ForAll(Seeds, seed =>
+        {
+            // n = 3–8 replicate injections of an extra sample, Pb ratios around 0.22, sometimes one far off.
+            var random = new Random(seed);
+            int n = random.Next(3, 9);
+            double[] pb = Enumerable.Range(0, n).Select(_ => 22000 + random.Next(-500, 501)).Select(x => (double)x).ToArray();
+            if (random.Next(2) == 0)
+            {
+                pb[random.Next(n)] = 30000;
+            }
+
+            List<RunInjection> rows = RunScenario.Rows();
+            rows.AddRange(pb.Select((x, k) => RunInjection.Sample(18 + k, "S9", RunScenario.Signals(x, 100000, 15000, 50000))));
+            RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+            RunReport scaled = RunProcessor.Process(RunScenario.Run(rows.Select(r => Rebuild(r, r.Order, ScaleIs(r.Signals, 3.7))).ToList()), RunScenario.Method());
+            AnalyteResult r = report.ResultFor("S9", "Pb")!;
+            bool expected = GrubbsTest.Evaluate(pb.Select(x => x / 100000).ToArray(), 0.05, OutlierSide.TwoSided).IsOutlier;
+            return r.Quantitation!.Replicates == n
+                && report.Injections.Where(o => o.Injection.Id == "S9").All(o => o.AnalyteStatuses["Pb"] == InjectionStatus.Quantified)
+                && r.Has(ResultQualifiers.SuspectReplicate) == expected
+                && scaled.ResultFor("S9", "Pb")!.Qualifiers == r.Qualifiers;
         });
 
     internal static RunInjection Rebuild(RunInjection r, int order, InjectionSignals signals) => r.Role switch

@@ -500,6 +500,68 @@ public class RunProcessorTests
         Assert.DoesNotContain("Drift across", report.ToString(), StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Process_FiveReplicatesWithOneFarOff_FlagsTheSuspectAndKeepsItInTheMean()
+    {
+        // S8: Pb ratios 0.22, 0.22, 0.22, 0.22, 0.30 (Bi 100000). Mean 0.236, s = sqrt((4·0.016² + 0.064²)/4) = 0.0357771,
+        // G = 0.064/0.0357771 = 4/√5 = 1.78885 > G_crit(α = 0.05, n = 5, two-sided) = 1.7150 (field-reference §5.1, VERIFIED).
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22000, 30000, 22000, 22000 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        AnalyteResult r = report.ResultFor("S8", "Pb")!;
+        Assert.True(r.Has(ResultQualifiers.SuspectReplicate));
+        Assert.Equal(5, r.Quantitation!.Replicates); // flagged, not removed
+        AssertClose((0.236 - PbIntercept) / PbSlope, r.InMeasuredSolution!.Value.Value);
+        Assert.Contains(r.Notes, n => n.StartsWith("Injection 20: ratio 0.3 is a suspect outlier by Grubbs' test (G = 1.78885 > 1.71", StringComparison.Ordinal));
+        InjectionOutcome suspect = report.Injections.Single(o => o.Injection.Order == 20);
+        Assert.Equal(InjectionStatus.Quantified, suspect.AnalyteStatuses["Pb"]);
+        Assert.Contains(suspect.Reasons, t => t.StartsWith("Pb: ratio 0.3 is a suspect outlier", StringComparison.Ordinal));
+        Assert.False(report.ResultFor("S8", "Cd")!.Has(ResultQualifiers.SuspectReplicate)); // identical Cd ratios: G = 0
+        Assert.Contains("suspect replicate", report.ToString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Process_ReplicatesWithinNormalScatter_AreNotFlagged()
+    {
+        // Ratios 0.2200, 0.2210, 0.2190, 0.2205: mean 0.220125, deviations −0.000125, 0.000875, −0.001125, 0.000375,
+        // s = sqrt(2.1875e-6/3) = 0.000853913, G = 0.001125/0.000853913 = 1.3175 < 1.4812 (n = 4, α = 0.05, field-reference §5.1).
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22100, 21900, 22050 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        Assert.False(report.ResultFor("S8", "Pb")!.Has(ResultQualifiers.SuspectReplicate));
+    }
+
+    [Theory]
+    // Ratios 0.22, 0.22, 0.205, 0.235, 0.22, 0.30: mean 1.4/6 = 0.2333333, SS = 3·0.0133333² + 0.0283333² + 0.0016667² + 0.0666667²
+    // = 0.00578333, s = sqrt(SS/5) = 0.0340098, G = 0.0666667/0.0340098 = 1.96022: above G_crit(n = 6) = 1.8871 at α = 0.05,
+    // below 1.9728 at α = 0.01 (two-sided, field-reference §5.1, VERIFIED).
+    [InlineData(0.05, true)]
+    [InlineData(0.01, false)]
+    public void Process_ReplicateOutlierSignificance_DecidesTheFlag(double alpha, bool flagged)
+    {
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22000, 20500, 23500, 22000, 30000 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunMethod m = RunScenario.Method();
+        var method = new RunMethod(m.Name, m.Analytes, m.InternalStandardConcentrations, m.RecoveryWindow) { ReplicateOutlierSignificance = alpha };
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), method);
+        Assert.Equal(flagged, report.ResultFor("S8", "Pb")!.Has(ResultQualifiers.SuspectReplicate));
+    }
+
     private static RunMethod WithPb(AnalyteMethod pb, bool withCd = true) =>
         new(
             "m",
