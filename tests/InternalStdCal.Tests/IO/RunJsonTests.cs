@@ -77,6 +77,15 @@ public class RunJsonTests
     }
 
     [Fact]
+    public void ReadFile_DemoJson_EqualsDemoCsv()
+    {
+        RunReadResult json = RunJson.ReadFile(System.IO.Path.ChangeExtension(RunCsvTests.DemoFile, ".json"));
+
+        Assert.True(json.IsClean, string.Join("; ", json.Problems));
+        RunAssert.Equal(RunCsv.ReadFile(RunCsvTests.DemoFile).Run!, json.Run!);
+    }
+
+    [Fact]
     public void ReadStrict_CleanFile_ReturnsRun()
     {
         AnalyticalRun run = RunJson.ReadStrict(new StringReader(Good.Replace("\"Cd\": \"x\"", "\"Cd\": 50", StringComparison.Ordinal)));
