@@ -40,7 +40,7 @@ public sealed class QualityControlCheck
     /// null without a window.</summary>
     public bool? Passed { get; }
 
-    /// <summary>Why a value is missing, and which results the check brackets.</summary>
+    /// <summary>Why a value is missing, if it is.</summary>
     public IReadOnlyList<string> Notes { get; }
 }
 

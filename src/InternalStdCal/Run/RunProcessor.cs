@@ -25,8 +25,8 @@ namespace InternalStdCal.Run;
 /// (<see cref="SampleQuantitation.Quantify"/>) and carried to the original sample through its
 /// <see cref="SamplePreparation"/>. Quality-control rows are judged one injection at a time.</para>
 /// <para><b>Brackets.</b> A failed quality-control check flags every sample injected between the previous and the next
-/// quality-control injection of the run (common practice); a check that applies but cannot be computed counts as
-/// failed.</para>
+/// quality-control injection of the run with a nominal value of that analyte (common practice); a check that applies
+/// but cannot be computed counts as failed.</para>
 /// <para>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
 /// decide what a flag or a failed check means for the reported results.</para>
 /// </remarks>
@@ -67,14 +67,17 @@ public static class RunProcessor
             calibrations.Add(cal);
             List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
             List<QualityControlCheck> checks = state.QualityControl(a, cal);
-            State.Bracket(checks, analyteResults, run);
+            State.Bracket(checks, analyteResults);
             results.AddRange(analyteResults);
             qc.AddRange(checks);
         }
 
         var duplicates = new List<DuplicateCheck>();
         var spikes = new List<SpikeCheck>();
-        State.PairChecks(run, method, results, duplicates, spikes);
+        State.PairChecks(method, results, duplicates, spikes);
+        var notes = run.Analytes.Where(a => method.For(a) is null)
+            .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
+            .ToList();
         return new RunReport(
             run,
             method,
@@ -84,7 +87,8 @@ public static class RunProcessor
             qc,
             duplicates,
             spikes,
-            state.Outcomes());
+            state.Outcomes(),
+            notes);
     }
 
     private sealed class RowState
@@ -165,9 +169,10 @@ public static class RunProcessor
 
         internal IReadOnlyDictionary<string, double?> References => _references;
 
-        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results, AnalyticalRun run)
+        // Brackets are formed by the QC injections that carry a nominal value of this analyte, in injection order.
+        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results)
         {
-            int[] qcOrders = run.Injections.Where(r => r.Role == InjectionRole.QualityControl).Select(r => r.Order).ToArray();
+            int[] qcOrders = checks.Select(c => c.Injection.Order).ToArray();
             foreach (QualityControlCheck c in checks.Where(c => c.Passed == false))
             {
                 int k = Array.IndexOf(qcOrders, c.Injection.Order);
@@ -185,7 +190,7 @@ public static class RunProcessor
             }
         }
 
-        internal static void PairChecks(AnalyticalRun run, RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
             foreach (AnalyteMethod a in method.Analytes)
             {
@@ -208,8 +213,6 @@ public static class RunProcessor
                     spikes.Add(Spike(a.Analyte, byId[row.ParentId!], s, added, method.SpikeRecovery));
                 }
             }
-
-            _ = run;
         }
 
         internal void Recoveries()
@@ -391,6 +394,11 @@ public static class RunProcessor
                 }
 
                 bool? passed = window is null ? null : recovery is double p && window.Contains(p);
+                if (passed == false)
+                {
+                    _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
+                }
+
                 checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Quantitation?.Concentration, recovery, window, passed, b.Notes.ToList()));
             }
 

@@ -48,7 +48,8 @@ public sealed class RunReport
         IReadOnlyList<QualityControlCheck> qualityControl,
         IReadOnlyList<DuplicateCheck> duplicates,
         IReadOnlyList<SpikeCheck> spikes,
-        IReadOnlyList<InjectionOutcome> injections)
+        IReadOnlyList<InjectionOutcome> injections,
+        IReadOnlyList<string> notes)
     {
         Run = run;
         Method = method;
@@ -59,6 +60,7 @@ public sealed class RunReport
         Duplicates = duplicates;
         Spikes = spikes;
         Injections = injections;
+        Notes = notes;
     }
 
     /// <summary>The run processed.</summary>
@@ -88,6 +90,9 @@ public sealed class RunReport
 
     /// <summary>One status row per input injection, in injection order.</summary>
     public IReadOnlyList<InjectionOutcome> Injections { get; }
+
+    /// <summary>Run-level remarks, e.g. analytes declared in the run but not processed by the method.</summary>
+    public IReadOnlyList<string> Notes { get; }
 
     /// <summary>The result of one sample for one analyte.</summary>
     /// <param name="sampleId">Sample id.</param>
@@ -224,6 +229,11 @@ public sealed class RunReport
 
         ResultText.AppendTable(sb, inj, Align6);
         sb.AppendLine("(! = IS recovery outside the window)");
+        foreach (string note in Notes)
+        {
+            sb.Append("Note: ").AppendLine(note);
+        }
+
         return sb.ToString();
     }
 
