@@ -63,7 +63,18 @@ public static class RunCsv
 
         var fileProblems = new List<RunFileProblem>();
         var drafts = new List<RowDraft>();
-        using CsvDataReader csv = CsvDataReader.Create(reader, options);
+        CsvDataReader csv;
+        try
+        {
+            csv = CsvDataReader.Create(reader, options);
+        }
+        catch (CsvMissingHeadersException)
+        {
+            fileProblems.Add(new RunFileProblem(line + 1, 0, null, null, "the file has no header row; a header naming the columns is required"));
+            return RunAssembler.Assemble(runName, Array.Empty<string>(), Array.Empty<string>(), new Dictionary<string, Concentration>(), fileProblems, Array.Empty<RowDraft>(), fatal: true);
+        }
+
+        using var owned = csv;
         int headerLine = line + 1;
         string[] names = Enumerable.Range(0, csv.FieldCount).Select(i => csv.GetName(i) ?? string.Empty).ToArray();
         line = headerLine + names.Sum(Breaks);
@@ -71,7 +82,7 @@ public static class RunCsv
         string[] analytes = columns.Where(c => c.Kind == Kind.Analyte).Select(c => c.Name).ToArray();
         string[] internalStandards = columns.Where(c => c.Kind == Kind.InternalStandard).Select(c => c.Name).ToArray();
         var cache = new PreparationCache();
-        while (!fatal && csv.Read())
+        while (!fatal && Next(csv, line, fileProblems))
         {
             int rowLine = line + 1;
             string[] cells = Enumerable.Range(0, csv.RowFieldCount).Select(i => csv.GetString(i)).ToArray();
@@ -196,6 +207,21 @@ public static class RunCsv
     }
 
     private static int Breaks(string s) => s.Count(ch => ch == '\n');
+
+    // The CSV library throws only on what it cannot split at all (e.g. a record larger than its buffer): reported,
+    // and the rows read so far are kept.
+    private static bool Next(CsvDataReader csv, int line, List<RunFileProblem> problems)
+    {
+        try
+        {
+            return csv.Read();
+        }
+        catch (Exception ex) when (ex is CsvFormatException or CsvRecordTooLargeException)
+        {
+            problems.Add(new RunFileProblem(line + 1, 0, null, null, "the CSV reader stopped here (" + ex.Message + "); later rows were not read"));
+            return false;
+        }
+    }
 
     private static Column[] Header(string[] names, int line, List<RunFileProblem> problems, out IReadOnlyDictionary<string, Concentration> isConcentrations, out bool fatal)
     {

@@ -123,6 +123,17 @@ public class RunCsvTests
         Assert.Equal(6, p.Line); // comment 1, header 2, row 1 on 3, row 2 on 4–5 (quoted line break), row 3 on 6
     }
 
+    [Theory]
+    [InlineData("")]
+    [InlineData("# only a comment\n")]
+    public void Read_NoHeader_NoRunAndProblem(string text)
+    {
+        RunReadResult r = Read(text);
+
+        Assert.Null(r.Run);
+        Assert.NotEmpty(r.Problems);
+    }
+
     [Fact]
     public void Read_SemicolonSeparated_NoRunAndHintAtSeparator()
     {
