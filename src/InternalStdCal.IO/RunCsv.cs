@@ -136,7 +136,8 @@ public static class RunCsv
     /// for none. Names must be IS of the run.</param>
     /// <exception cref="ArgumentNullException"><paramref name="run"/> or <paramref name="writer"/> is null.</exception>
     /// <exception cref="ArgumentException">A name cannot be written (it contains '[' or ']', or starts or ends with
-    /// white space), a concentration names an IS the run lacks, or a dilution step uses a density.</exception>
+    /// white space), an id starts or ends with white space, a concentration names an IS the run lacks, or a dilution
+    /// step uses a density.</exception>
     public static void Write(AnalyticalRun run, TextWriter writer, IReadOnlyDictionary<string, Concentration>? internalStandardConcentrations = null)
     {
         Guard.NotNull(run, nameof(run));
@@ -154,6 +155,8 @@ public static class RunCsv
         {
             CheckName(n, nameof(run));
         }
+
+        CheckIds(run);
 
         string[] nominal = run.Analytes.Where(a => run.Injections.Any(r => r.Nominal.ContainsKey(a))).ToArray();
         string[] added = run.Analytes.Where(a => run.Injections.Any(r => r.Added.ContainsKey(a))).ToArray();
@@ -203,6 +206,15 @@ public static class RunCsv
         if (name.Any(ch => ch is '[' or ']') || name.Trim().Length != name.Length)
         {
             throw new ArgumentException("Parameter '" + paramName + "' has the name '" + name + "'; names written to a run file must not contain '[' or ']' nor start or end with white space.", paramName);
+        }
+    }
+
+    /// <summary>Readers trim ids, so ids with outer white space cannot be written faithfully.</summary>
+    internal static void CheckIds(AnalyticalRun run)
+    {
+        foreach (RunInjection r in run.Injections.Where(r => r.Id.Trim().Length != r.Id.Length))
+        {
+            throw new ArgumentException("Parameter 'run': row " + r + " has an id with leading or trailing white space, which a run file cannot keep.", nameof(run));
         }
     }
 

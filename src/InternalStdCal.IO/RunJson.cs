@@ -180,7 +180,8 @@ public static class RunJson
     /// <param name="internalStandardConcentrations">IS name → IS concentration to state; null for none. Names must be
     /// IS of the run.</param>
     /// <exception cref="ArgumentNullException"><paramref name="run"/> or <paramref name="writer"/> is null.</exception>
-    /// <exception cref="ArgumentException">A concentration names an IS the run lacks, or a dilution step uses a density.</exception>
+    /// <exception cref="ArgumentException">A concentration names an IS the run lacks, an id starts or ends with white
+    /// space, or a dilution step uses a density.</exception>
     public static void Write(AnalyticalRun run, TextWriter writer, IReadOnlyDictionary<string, Concentration>? internalStandardConcentrations = null)
     {
         Guard.NotNull(run, nameof(run));
@@ -191,6 +192,7 @@ public static class RunJson
             throw new ArgumentException("Parameter 'internalStandardConcentrations' names IS '" + isName + "', which run '" + run.Name + "' does not declare.", nameof(internalStandardConcentrations));
         }
 
+        RunCsv.CheckIds(run);
         using var stream = new MemoryStream();
         using (var w = new Utf8JsonWriter(stream, WriterOptions))
         {

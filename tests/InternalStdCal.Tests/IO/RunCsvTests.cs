@@ -194,4 +194,22 @@ public class RunCsvTests
         RunAssert.Equal(first.Run!, back.Run!);
         Assert.Equal(first.InternalStandardConcentrations, back.InternalStandardConcentrations);
     }
+
+    [Fact]
+    public void Write_IdWithOuterSpace_ThrowsNamingRow()
+    {
+        AnalyticalRun run = AnalyticalRun.Create("r", new[] { "Cd" }, new[] { "Rh" }, new[] { RunInjection.Sample(1, " S1", InjectionSignals.Empty) });
+
+        var ex = Assert.Throws<ArgumentException>("run", () => RunCsv.Write(run, new StringWriter()));
+        Assert.Contains("#1 Sample ' S1'", ex.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Write_DensityStep_Throws()
+    {
+        var step = InternalStdCal.Preparation.DilutionStep.VolumetricWithDensity(Measured.Exact(Volume.FromMillilitres(1)), Measured.Exact(Volume.FromMillilitres(10)), Density.FromGramsPerMillilitre(1.02), 0);
+        AnalyticalRun run = AnalyticalRun.Create("r", new[] { "Cd" }, new[] { "Rh" }, new[] { RunInjection.Sample(1, "S1", InjectionSignals.Empty, SamplePreparation.Liquid(step)) });
+
+        Assert.Throws<ArgumentException>("step", () => RunCsv.Write(run, new StringWriter()));
+    }
 }
