@@ -133,14 +133,33 @@ public sealed class RegressionFit
             return;
         }
 
+        // One step of iterative refinement in closed form: residuals about the provisional line ŷ − m =
+        // α + b·(x − c) with x − c and y − m split exactly (TwoSum) and b·(x − c) taken exactly (TwoProduct),
+        // so each residual carries one rounding; their least-squares correction (δα, δb) is added to the intercept
+        // unrounded. This keeps the intercept accurate when |b·x̄w| ≫ |a| (the usual calibration case).
+        double alpha = shiftY - (b * shiftX), swr = 0, swdxr = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double x = d[i], y = d[n + i];
+            double dx = x - c, dy = y - m, bdx = b * dx;
+            double r = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
+                + CompensatedSum.SumError(y, -m, dy) - (b * CompensatedSum.SumError(x, -c, dx)) - alpha;
+            double wr = d[(2 * n) + i] * r;
+            swr += wr;
+            swdxr += wr * dx;
+        }
+
+        double deltaB = (swdxr - (shiftX * swr)) / sxx;
+        double deltaAlpha = (swr / sw) - (shiftX * deltaB);
         _meanX = c + shiftX;
         _meanY = m + shiftY;
         var a = default(CompensatedSum);
         a.Add(m);
-        a.Add(shiftY);
+        a.Add(alpha + deltaAlpha);
         a.AddProduct(-b, c);
-        a.Add(-b * shiftX);
+        a.Add(-deltaB * c);
         _beta0 = a.Value;
+        b += deltaB;
         _beta1 = b;
 
         // Basis (1, u), u = (x − x̄w)/s with s² = Sxx,w/Σw: the design is orthogonal and R = √Σw·I.
