@@ -60,7 +60,9 @@ public sealed class RegressionFit
     // t((1 + 0.95)/2, n − p), computed on first use; 0 until then.
     private double _t95;
 
-    private RegressionFit(CalibrationModel model, Weighting weighting, double[] data, int n, double maxRawWeight, double minX, double maxX)
+    // data: x, y and raw weights already multiplied by weightScale (an exact power of 2); sw, swx, swy: Σw, Σw·x,
+    // Σw·y of those weights; minX, maxX: the x range.
+    private RegressionFit(CalibrationModel model, Weighting weighting, double[] data, int n, double minX, double maxX, double weightScale, double sw, double swx, double swy)
     {
         Model = model;
         Weighting = weighting;
@@ -71,18 +73,8 @@ public sealed class RegressionFit
         ParameterCount = model == CalibrationModel.Quadratic ? 3 : model == CalibrationModel.Linear ? 2 : 1;
         DegreesOfFreedom = n - ParameterCount;
 
-        // Normalised weights, Σw = n. The raw weights are first scaled exactly by a power of 2 that brings the
-        // largest into [1, 2), so the sum cannot overflow; the weighted sums of x and y come in the same pass.
-        double sw = 0, swx = 0, swy = 0;
-        _weightScale = weighting.Scheme == WeightingScheme.None ? 1.0 : PowerOfTwoScale(maxRawWeight);
-        for (int i = 0; i < n; i++)
-        {
-            double w = data[(2 * n) + i] *= _weightScale;
-            sw += w;
-            swx += w * data[i];
-            swy += w * data[n + i];
-        }
-
+        // Normalised weights, Σw = n (applied in the model's next pass).
+        _weightScale = weightScale;
         _weightNormaliser = weighting.Scheme == WeightingScheme.None ? 1.0 : n / sw;
         double meanX = swx / sw, meanY = swy / sw;
         switch (model)
@@ -400,6 +392,13 @@ public sealed class RegressionFit
     /// weighting is undefined at a point (e.g. 1/x at x = 0); or the x values are numerically degenerate.</exception>
     public static RegressionFit Fit(IReadOnlyList<double> x, IReadOnlyList<double> y, CalibrationModel model, Weighting? weighting = null)
     {
+        weighting ??= Weighting.None;
+        if (model != CalibrationModel.Quadratic && x is double[] xa && y is double[] ya && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length)
+            && TryFitLineFast(xa, ya, model, weighting) is RegressionFit fast)
+        {
+            return fast;
+        }
+
         Guard.NotNull(x, nameof(x));
         int n = x.Count;
         var data = new double[3 * n];
@@ -446,7 +445,6 @@ public sealed class RegressionFit
                 nameof(x));
         }
 
-        weighting ??= Weighting.None;
         if (weighting.IsPerPoint && weighting.PointValues.Count != n)
         {
             throw new ArgumentException(
@@ -456,18 +454,78 @@ public sealed class RegressionFit
 
         // Raw weights (checked), their maximum and the x range in one pass.
         double maxRawWeight = 0, minX = double.PositiveInfinity, maxX = double.NegativeInfinity;
-        bool unweighted = weighting.Scheme == WeightingScheme.None;
         for (int i = 0; i < n; i++)
         {
             double xi = data[i];
-            double w = unweighted ? 1.0 : weighting.PointWeight(i, xi, data[n + i]);
+            double w = weighting.PointWeight(i, xi, data[n + i]);
             data[(2 * n) + i] = w;
             maxRawWeight = Math.Max(maxRawWeight, w);
             minX = Math.Min(minX, xi);
             maxX = Math.Max(maxX, xi);
         }
 
-        return new RegressionFit(model, weighting, data, n, maxRawWeight, minX, maxX);
+        // Weights scaled exactly by the power of 2 that brings the largest into [1, 2): the sums cannot overflow.
+        double scale = weighting.Scheme == WeightingScheme.None ? 1.0 : PowerOfTwoScale(maxRawWeight);
+        double sw = 0, swx = 0, swy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double w = data[(2 * n) + i] *= scale;
+            sw += w;
+            swx += w * data[i];
+            swy += w * data[n + i];
+        }
+
+        return new RegressionFit(model, weighting, data, n, minX, maxX, scale, sw, swx, swy);
+    }
+
+    /// <summary>
+    /// One pass for straight lines given as arrays: copies x, y and the raw weights, checks them and forms Σw, Σw·x,
+    /// Σw·y. Returns null on anything unusual (a non-finite value, an undefined weight, all x equal, a sum out of
+    /// the safe range) so that the caller takes the checked path, which reports it. Raw weights are not scaled:
+    /// scaling by a power of 2 is exact, so the sums are those of the scaled path whenever they stay in range.
+    /// </summary>
+    private static RegressionFit? TryFitLineFast(double[] x, double[] y, CalibrationModel model, Weighting weighting)
+    {
+        int n = x.Length;
+        if (y.Length != n || n < (model == CalibrationModel.Linear ? 3 : 2))
+        {
+            return null;
+        }
+
+        var data = new double[3 * n];
+        double x0 = x[0], minX = x0, maxX = x0, sw = 0, swx = 0, swy = 0;
+        WeightingScheme scheme = weighting.Scheme;
+        for (int i = 0; i < n; i++)
+        {
+            double xi = x[i], yi = y[i];
+
+            // The common schemes inline (no call in the loop); 1/x at x ≤ 0 gives a weight ≤ 0 or ∞, refused below.
+            double w = scheme == WeightingScheme.None ? 1.0
+                : scheme == WeightingScheme.InverseX ? 1.0 / xi
+                : weighting.PointWeightOrNaN(i, xi, yi);
+
+            // x − x is 0 exactly for finite x, NaN for NaN and ±∞; w must also be > 0.
+            if (!((xi - xi) + (yi - yi) + (w - w) == 0 && w > 0))
+            {
+                return null;
+            }
+
+            data[i] = xi;
+            data[n + i] = yi;
+            data[(2 * n) + i] = w;
+            minX = xi < minX ? xi : minX;
+            maxX = xi > maxX ? xi : maxX;
+            sw += w;
+            swx += w * xi;
+            swy += w * yi;
+        }
+
+        if (minX == maxX || !((swx - swx) + (swy - swy) == 0 && sw > 1e-100 && sw < 1e100))
+        {
+            return null;
+        }
+
+        return new RegressionFit(model, weighting, data, n, minX, maxX, 1.0, sw, swx, swy);
     }
 
     /// <summary>Covariance of two coefficients, s²·(XᵀWX)⁻¹ in the order of <see cref="Coefficients"/>.</summary>

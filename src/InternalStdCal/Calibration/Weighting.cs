@@ -163,6 +163,19 @@ public sealed class Weighting : IEquatable<Weighting>
     public override string ToString() =>
         IsPerPoint ? string.Format(CultureInfo.InvariantCulture, "{0} ({1} values)", Name, _values.Length) : Name;
 
+    /// <summary>Raw weight of standard <paramref name="index"/> (any scheme), or NaN where the scheme is undefined
+    /// (the caller checks finite and &gt; 0; <see cref="PointWeight"/> gives the message).</summary>
+    internal double PointWeightOrNaN(int index, double x, double y) => Scheme switch
+    {
+        WeightingScheme.None => 1.0,
+        WeightingScheme.InverseX => x > 0 ? 1.0 / x : double.NaN,
+        WeightingScheme.InverseXSquared => x != 0 ? 1.0 / (x * x) : double.NaN,
+        WeightingScheme.InverseY => y > 0 ? 1.0 / y : double.NaN,
+        WeightingScheme.InverseYSquared => y > 0 ? 1.0 / (y * y) : double.NaN,
+        WeightingScheme.InverseVariance => 1.0 / (_values[index] * _values[index]),
+        _ => _values[index],
+    };
+
     /// <summary>Raw weight of standard <paramref name="index"/> (any scheme), checked finite and &gt; 0.</summary>
     /// <exception cref="ArgumentException">The weight is undefined, not finite or not &gt; 0 (names parameter x).</exception>
     internal double PointWeight(int index, double x, double y)
