@@ -31,8 +31,10 @@ namespace InternalStdCal.Calibration;
 /// </remarks>
 public sealed class RegressionFit
 {
-    // x, y and normalised weights of the standards: x in [0, n), y in [n, 2n), w in [2n, 3n).
-    private readonly double[] _data;
+    // x, y and normalised weights of the standards (three arrays: below the large-object threshold up to ~10⁴ points).
+    private readonly double[] _x;
+    private readonly double[] _y;
+    private readonly double[] _w;
 
     // Assigned during construction only (the constructor's helper methods set them): coefficients in the
     // order of Coefficients; θ and the upper-triangular R⁻¹ of the √w-scaled design in the basis z(x) (see
@@ -60,13 +62,15 @@ public sealed class RegressionFit
     // t((1 + 0.95)/2, n − p), computed on first use; 0 until then.
     private double _t95;
 
-    // data: x, y and raw weights already multiplied by weightScale (an exact power of 2); sw, swx, swy: Σw, Σw·x,
+    // x, y and raw weights w already multiplied by weightScale (an exact power of 2); sw, swx, swy: Σw, Σw·x,
     // Σw·y of those weights; minX, maxX: the x range.
-    private RegressionFit(CalibrationModel model, Weighting weighting, double[] data, int n, double minX, double maxX, double weightScale, double sw, double swx, double swy)
+    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double[] w, int n, double minX, double maxX, double weightScale, double sw, double swx, double swy)
     {
         Model = model;
         Weighting = weighting;
-        _data = data;
+        _x = x;
+        _y = y;
+        _w = w;
         Count = n;
         MinX = minX;
         MaxX = maxX;
@@ -100,14 +104,14 @@ public sealed class RegressionFit
     /// </summary>
     private void FitLine(double c, double m)
     {
-        double[] d = _data;
+        double[] xs = _x, ys = _y, ws = _w;
         int n = Count;
         double k = _weightNormaliser;
         double sw = 0, sdx = 0, sdy = 0, sxxAboutC = 0, sxy = 0;
         for (int i = 0; i < n; i++)
         {
-            double w = d[(2 * n) + i] *= k;
-            double dx = d[i] - c, dy = d[n + i] - m, wdx = w * dx;
+            double w = ws[i] *= k;
+            double dx = xs[i] - c, dy = ys[i] - m, wdx = w * dx;
             sw += w;
             sdx += wdx;
             sdy += w * dy;
@@ -132,11 +136,11 @@ public sealed class RegressionFit
         double alpha = shiftY - (b * shiftX), swr = 0, swdxr = 0;
         for (int i = 0; i < n; i++)
         {
-            double x = d[i], y = d[n + i];
+            double x = xs[i], y = ys[i];
             double dx = x - c, dy = y - m, bdx = b * dx;
             double r = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
                 + CompensatedSum.SumError(y, -m, dy) - (b * CompensatedSum.SumError(x, -c, dx)) - alpha;
-            double wr = d[(2 * n) + i] * r;
+            double wr = ws[i] * r;
             swr += wr;
             swdxr += wr * dx;
         }
@@ -169,14 +173,14 @@ public sealed class RegressionFit
     /// <summary>Line through the origin, b = Σw·x·y/Σw·x²; falls back to Householder QR if a sum overflows or underflows.</summary>
     private void FitThroughOrigin(double c, double m)
     {
-        double[] d = _data;
+        double[] xs = _x, ys = _y, ws = _w;
         int n = Count;
         double k = _weightNormaliser;
         double sw = 0, sdx = 0, sdy = 0, sxx = 0, sxy = 0;
         for (int i = 0; i < n; i++)
         {
-            double w = d[(2 * n) + i] *= k;
-            double x = d[i], y = d[n + i], wx = w * x;
+            double w = ws[i] *= k;
+            double x = xs[i], y = ys[i], wx = w * x;
             sw += w;
             sdx += w * (x - c);
             sdy += w * (y - m);
@@ -205,9 +209,9 @@ public sealed class RegressionFit
     private void NormaliseWeights()
     {
         int n = Count;
-        for (int i = 2 * n; i < 3 * n; i++)
+        for (int i = 0; i < n; i++)
         {
-            _data[i] *= _weightNormaliser;
+            _w[i] *= _weightNormaliser;
         }
     }
 
@@ -218,10 +222,7 @@ public sealed class RegressionFit
     private void FitQr()
     {
         int n = Count, p = ParameterCount;
-        double[] x = new double[n], y = new double[n], weights = new double[n];
-        Array.Copy(_data, 0, x, 0, n);
-        Array.Copy(_data, n, y, 0, n);
-        Array.Copy(_data, 2 * n, weights, 0, n);
+        double[] x = _x, y = _y, weights = _w;
         _meanX = WeightedMean(x, weights);
         _meanY = WeightedMean(y, weights);
         _center = Model == CalibrationModel.LinearThroughOrigin ? 0.0 : _meanX;
@@ -393,7 +394,7 @@ public sealed class RegressionFit
     public static RegressionFit Fit(IReadOnlyList<double> x, IReadOnlyList<double> y, CalibrationModel model, Weighting? weighting = null)
     {
         weighting ??= Weighting.None;
-        if (model != CalibrationModel.Quadratic && x is double[] xa && y is double[] ya && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length)
+        if (model is CalibrationModel.Linear or CalibrationModel.LinearThroughOrigin && x is double[] xa && y is double[] ya && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length)
             && TryFitLineFast(xa, ya, model, weighting) is RegressionFit fast)
         {
             return fast;
@@ -401,16 +402,17 @@ public sealed class RegressionFit
 
         Guard.NotNull(x, nameof(x));
         int n = x.Count;
-        var data = new double[3 * n];
-        CopyFinite(x, data, 0, nameof(x));
+        var xs = new double[n];
+        var ys = new double[n];
+        CopyFinite(x, xs, nameof(x));
         Guard.NotNull(y, nameof(y));
         if (y.Count == n)
         {
-            CopyFinite(y, data, n, nameof(y));
+            CopyFinite(y, ys, nameof(y));
         }
         else
         {
-            CopyFinite(y, new double[y.Count], 0, nameof(y));
+            CopyFinite(y, new double[y.Count], nameof(y));
             Guard.SameLength(n, y.Count, nameof(x), nameof(y));
         }
 
@@ -437,7 +439,7 @@ public sealed class RegressionFit
                 nameof(x));
         }
 
-        int distinct = CountDistinct(data, n, minDistinct);
+        int distinct = CountDistinct(xs, minDistinct);
         if (distinct < minDistinct)
         {
             throw new ArgumentException(
@@ -453,12 +455,12 @@ public sealed class RegressionFit
         }
 
         // Raw weights (checked), their maximum and the x range in one pass.
+        var ws = new double[n];
         double maxRawWeight = 0, minX = double.PositiveInfinity, maxX = double.NegativeInfinity;
         for (int i = 0; i < n; i++)
         {
-            double xi = data[i];
-            double w = weighting.PointWeight(i, xi, data[n + i]);
-            data[(2 * n) + i] = w;
+            double xi = xs[i];
+            double w = ws[i] = weighting.PointWeight(i, xi, ys[i]);
             maxRawWeight = Math.Max(maxRawWeight, w);
             minX = Math.Min(minX, xi);
             maxX = Math.Max(maxX, xi);
@@ -469,13 +471,13 @@ public sealed class RegressionFit
         double sw = 0, swx = 0, swy = 0;
         for (int i = 0; i < n; i++)
         {
-            double w = data[(2 * n) + i] *= scale;
+            double w = ws[i] *= scale;
             sw += w;
-            swx += w * data[i];
-            swy += w * data[n + i];
+            swx += w * xs[i];
+            swy += w * ys[i];
         }
 
-        return new RegressionFit(model, weighting, data, n, minX, maxX, scale, sw, swx, swy);
+        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, scale, sw, swx, swy);
     }
 
     /// <summary>
@@ -492,7 +494,9 @@ public sealed class RegressionFit
             return null;
         }
 
-        var data = new double[3 * n];
+        var xs = new double[n];
+        var ys = new double[n];
+        var ws = new double[n];
         double x0 = x[0], minX = x0, maxX = x0, sw = 0, swx = 0, swy = 0;
         WeightingScheme scheme = weighting.Scheme;
         for (int i = 0; i < n; i++)
@@ -510,9 +514,9 @@ public sealed class RegressionFit
                 return null;
             }
 
-            data[i] = xi;
-            data[n + i] = yi;
-            data[(2 * n) + i] = w;
+            xs[i] = xi;
+            ys[i] = yi;
+            ws[i] = w;
             minX = xi < minX ? xi : minX;
             maxX = xi > maxX ? xi : maxX;
             sw += w;
@@ -525,7 +529,7 @@ public sealed class RegressionFit
             return null;
         }
 
-        return new RegressionFit(model, weighting, data, n, minX, maxX, 1.0, sw, swx, swy);
+        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, 1.0, sw, swx, swy);
     }
 
     /// <summary>Covariance of two coefficients, s²·(XᵀWX)⁻¹ in the order of <see cref="Coefficients"/>.</summary>
@@ -817,12 +821,12 @@ public sealed class RegressionFit
         var g = new double[p];
         for (int i = 0; i < n; i++)
         {
-            double xi = _data[i];
-            double r = CompensatedResidual(xi, _data[n + i]);
+            double xi = _x[i];
+            double r = CompensatedResidual(xi, _y[i]);
             Basis(xi, z);
             for (int j = 0; j < p; j++)
             {
-                g[j] += _data[(2 * n) + i] * z[j] * r;
+                g[j] += _w[i] * z[j] * r;
             }
         }
 
@@ -1012,7 +1016,7 @@ public sealed class RegressionFit
         double rss = 0, total = 0;
         for (int i = 0; i < n; i++)
         {
-            double x = _data[i], y = _data[n + i], w = _data[(2 * n) + i];
+            double x = _x[i], y = _y[i], w = _w[i];
             double weighted = Math.Sqrt(w) * CompensatedResidual(x, y);
             rss += weighted * weighted;
             double d = origin ? y : y - _meanY;
@@ -1208,8 +1212,8 @@ public sealed class RegressionFit
         int n = Count;
         for (int i = 0; i < n; i++)
         {
-            double d = _data[i] - center;
-            sum += _data[(2 * n) + i] * d * d;
+            double d = _x[i] - center;
+            sum += _w[i] * d * d;
         }
 
         return sum;
@@ -1268,14 +1272,14 @@ public sealed class RegressionFit
         return max * Math.Sqrt(sum / x.Length);
     }
 
-    /// <summary>Copies <paramref name="values"/> into <paramref name="target"/> from <paramref name="offset"/>, refusing NaN and ±∞.</summary>
-    private static void CopyFinite(IReadOnlyList<double> values, double[] target, int offset, string paramName)
+    /// <summary>Copies <paramref name="values"/> into <paramref name="target"/>, refusing NaN and ±∞.</summary>
+    private static void CopyFinite(IReadOnlyList<double> values, double[] target, string paramName)
     {
         if (values is double[] array)
         {
             for (int i = 0; i < array.Length; i++)
             {
-                target[offset + i] = CheckFinite(array[i], i, paramName);
+                target[i] = CheckFinite(array[i], i, paramName);
             }
         }
         else
@@ -1283,7 +1287,7 @@ public sealed class RegressionFit
             int count = values.Count;
             for (int i = 0; i < count; i++)
             {
-                target[offset + i] = CheckFinite(values[i], i, paramName);
+                target[i] = CheckFinite(values[i], i, paramName);
             }
         }
     }
@@ -1300,9 +1304,10 @@ public sealed class RegressionFit
         return v;
     }
 
-    /// <summary>Number of distinct values among the first <paramref name="n"/>, counted up to <paramref name="cap"/> (≤ 3; exact below it).</summary>
-    private static int CountDistinct(double[] values, int n, int cap)
+    /// <summary>Number of distinct values, counted up to <paramref name="cap"/> (≤ 3; exact below it).</summary>
+    private static int CountDistinct(double[] values, int cap)
     {
+        int n = values.Length;
         if (n == 0)
         {
             return 0;
@@ -1335,13 +1340,9 @@ public sealed class RegressionFit
         internal Views(RegressionFit fit)
         {
             int n = fit.Count, p = fit.ParameterCount;
-            double[] data = fit._data;
-            var x = new double[n];
-            var y = new double[n];
-            var weights = new double[n];
-            Array.Copy(data, 0, x, 0, n);
-            Array.Copy(data, n, y, 0, n);
-            Array.Copy(data, 2 * n, weights, 0, n);
+            var x = (double[])fit._x.Clone();
+            var y = (double[])fit._y.Clone();
+            var weights = (double[])fit._w.Clone();
             var coefficients = new double[p];
             var standardErrors = new double[p];
             for (int i = 0; i < p; i++)
