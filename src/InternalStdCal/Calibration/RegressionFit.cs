@@ -12,8 +12,8 @@ namespace InternalStdCal.Calibration;
 /// </summary>
 /// <remarks>
 /// <para><b>Numerics.</b> Straight lines: closed form from weighted sums centred at the weighted means (corrected
-/// two-pass algorithm), intercept and residuals with compensated arithmetic; no arrays besides one copy of the
-/// data are allocated. Quadratic: the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x, rows multiplied by √w
+/// two-pass algorithm), then one refinement pass on residuals split exactly (TwoSum/TwoProduct), the intercept
+/// formed with compensated arithmetic; the fit allocates only the copies of x and y and the weights. Quadratic: the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x, rows multiplied by √w
 /// and solved by Householder QR, coefficients and covariance transformed back to the a, b, c basis, followed
 /// by one step of iterative refinement on residuals computed with compensated arithmetic (the lines fall back
 /// to this path if a sum overflows or underflows). Residual statistics and the list properties are computed on
