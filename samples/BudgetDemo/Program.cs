@@ -19,7 +19,8 @@ Measured<Volume> Flask(double ml) => VolumetricEquipment.ClassAOneMarkFlask(Ml(m
 string F(double value, string format) => value.ToString(format, CultureInfo.InvariantCulture);
 
 // 1. The stock: 25.03 mg of VR-23 (purity 99.85 % ± 0.10 %) weighed by difference and made up to 25 mL.
-//    The flask's u combines its class A tolerance with a ±4 °C temperature effect.
+//    The balance: linearity ±0.1 mg, repeatability 0.05 mg, readability 0.1 mg. The flask's u combines its class A
+//    tolerance with a ±4 °C temperature effect.
 var balance = new Balance(Mass.FromMilligrams(0.1), Mass.FromMilligrams(0.05), Mass.FromMilligrams(0.1));
 Measured<Mass> weighed = balance.WeighByDifference(Mass.FromMilligrams(25.03));
 Purity purity = Purity.FromTolerance(0.9985, 0.0010, ToleranceDistribution.Rectangular);
@@ -28,7 +29,7 @@ Measured<Volume> stockFlask = VolumetricEquipment.Combine(
     Flask(25).StandardUncertainty,
     VolumetricEquipment.TemperatureEffect(Ml(25), 4, VolumetricEquipment.WaterExpansionCoefficientPerKelvin));
 PreparedSolution stock = PreparedSolution.FromWeighedSubstance("VR-23 stock", weighed, purity, stockFlask, ConcentrationUnit.MilligramPerLitre);
-Console.WriteLine("Balance: one reading u = " + balance.SingleReadingStandardUncertainty.ToString("G3", null) + "; weighed " + weighed.ToString("G4", null));
+Console.WriteLine("Balance: one reading u = " + balance.SingleReadingStandardUncertainty.ConvertTo(MassUnit.Milligram).ToString("G3", null) + "; weighed " + weighed.ToString("G4", null));
 Console.WriteLine(stock);
 Console.WriteLine();
 
