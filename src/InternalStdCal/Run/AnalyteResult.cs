@@ -1,7 +1,11 @@
+using System;
 using System.Collections.Generic;
+using System.Linq;
+using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
+using InternalStdCal.Uncertainty;
 
 namespace InternalStdCal.Run;
 
@@ -9,8 +13,9 @@ namespace InternalStdCal.Run;
 /// The result of one sample (or duplicate, spiked sample, method blank) for one analyte: the concentration in the
 /// measured solution and in the original sample, the interval, the flags and the trail of what was computed.
 /// </summary>
-/// <remarks>Values below a reporting limit are kept (flagged). A result without a value carries
-/// <see cref="ResultQualifiers.NotQuantified"/> and the reason in <see cref="Notes"/>.</remarks>
+/// <remarks>Reporting limits apply in the original sample (<see cref="Reported"/>); values below a limit are kept
+/// (flagged). A result without a value carries <see cref="ResultQualifiers.NotQuantified"/> and the reason in
+/// <see cref="Notes"/>.</remarks>
 public sealed class AnalyteResult
 {
     internal AnalyteResult(
@@ -22,6 +27,7 @@ public sealed class AnalyteResult
         SampleResult? inSample,
         Concentration? sampleLower,
         Concentration? sampleUpper,
+        ReportedValue? reported,
         ResultQualifiers qualifiers,
         IReadOnlyList<string> notes)
     {
@@ -33,6 +39,7 @@ public sealed class AnalyteResult
         SampleCalculation = inSample;
         SampleLower = sampleLower;
         SampleUpper = sampleUpper;
+        Reported = reported;
         Qualifiers = qualifiers;
         Notes = notes;
     }
@@ -76,6 +83,17 @@ public sealed class AnalyteResult
     /// <summary>Upper confidence limit carried to the original sample; null without an interval.</summary>
     public Concentration? SampleUpper { get; }
 
+    /// <summary>
+    /// The original-sample result as reported against the analyte's <see cref="AnalyteMethod.Limits"/>: quantified,
+    /// "&lt; LOQ" or "&lt; LOD" (not detected), always keeping the raw estimate (<see cref="ReportedValue.Estimate"/>,
+    /// equal to <see cref="InSample"/>'s value). Without limits the value is reported as quantified. Null when there is
+    /// no result in the original sample, or when the limits are of another kind than that result (see
+    /// <see cref="Notes"/>).
+    /// </summary>
+    /// <remarks>The limits are the method's LOD/LOQ in the original sample (common practice), so a diluted sample is
+    /// judged after its dilution factor is applied, not in the measured solution.</remarks>
+    public ReportedValue? Reported { get; }
+
     /// <summary>The qualifier flags of the result.</summary>
     public ResultQualifiers Qualifiers { get; }
 
@@ -86,4 +104,53 @@ public sealed class AnalyteResult
     /// <param name="flag">A flag.</param>
     /// <returns>Whether every bit of <paramref name="flag"/> is set.</returns>
     public bool Has(ResultQualifiers flag) => (Qualifiers & flag) == flag;
+
+    /// <summary>
+    /// The uncertainty budget of this result in the original sample, in one call: <see cref="Quantitation"/> (x₀ with
+    /// its standard error from the calibration), the dilution steps, digest and sample amounts of the sample's
+    /// <see cref="SamplePreparation"/> (through <see cref="SampleCalculation"/>) and optional caller components,
+    /// evaluated by <see cref="ResultUncertaintyBudget.Create"/> (JCGM 100:2008 law of propagation).
+    /// </summary>
+    /// <remarks>
+    /// <para>A censored result (&lt; LOQ, &lt; LOD) has a budget: that of its raw estimate. The IS concentration is not
+    /// entered: one IS addition common to standards and samples cancels in the ratio (common practice; see
+    /// <see cref="ResultUncertaintyBudget.Create"/> for building a budget with it).</para>
+    /// <para>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
+    /// decide which components belong in the budget.</para>
+    /// </remarks>
+    /// <param name="factors">Optional caller components, e.g. recovery (exponent −1) or a matrix factor of value 1.</param>
+    /// <param name="factorExponents">Exponents of <paramref name="factors"/>; null means +1 for each.</param>
+    /// <param name="addReplicateRepeatability">Adds the spread of the sample's injections as a separate factor (see
+    /// <see cref="ResultUncertaintyBudget.Create"/> for when this is appropriate).</param>
+    /// <param name="coverageProbability">p of the GUM evaluation, in (0, 1); default 0.95.</param>
+    /// <returns>The budget, in the unit of <see cref="InSample"/>.</returns>
+    /// <exception cref="InvalidOperationException">The result has no quantitation (missing or invalid signals, no
+    /// calibration, response not readable off the calibration) or no result in the original sample (the preparation did
+    /// not fit); the message gives the reason from <see cref="Notes"/>.</exception>
+    /// <exception cref="ArgumentNullException">An item of <paramref name="factors"/> is null.</exception>
+    /// <exception cref="ArgumentException">As <see cref="ResultUncertaintyBudget.Create"/>: exponents of another length,
+    /// duplicate names, a bad factor value, or the replicate term asked for with fewer than two injections or x₀ = 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageProbability"/> or an exponent is out of range.</exception>
+    public ResultUncertaintyBudget UncertaintyBudget(
+        IReadOnlyList<UncertainInput>? factors = null,
+        IReadOnlyList<double>? factorExponents = null,
+        bool addReplicateRepeatability = false,
+        double coverageProbability = 0.95)
+    {
+        if (Quantitation is not QuantitationResult q)
+        {
+            throw new InvalidOperationException(
+                "Result '" + SampleId + "' / " + Analyte + " has no quantitation, so it has no uncertainty budget: "
+                + string.Join(" ", Notes.Where(n => n.StartsWith("Not quantified", StringComparison.Ordinal) || n.StartsWith("Injection ", StringComparison.Ordinal))));
+        }
+
+        if (SampleCalculation is not SampleResult prep)
+        {
+            throw new InvalidOperationException(
+                "Result '" + SampleId + "' / " + Analyte + " has no result in the original sample, so it has no uncertainty budget there: "
+                + string.Join(" ", Notes.Where(n => n.StartsWith("No result in the original sample", StringComparison.Ordinal))));
+        }
+
+        return ResultUncertaintyBudget.Create(q, prep, null, factors, factorExponents, addReplicateRepeatability, coverageProbability);
+    }
 }

@@ -42,4 +42,8 @@ public enum ResultQualifiers
 
     /// <summary>The spike recovery is outside the method's window (or could not be computed).</summary>
     SpikeRecoveryOutOfWindow = 1024,
+
+    /// <summary>With at least 3 replicate injections used, Grubbs' test flags one injection's ratio as a suspect outlier
+    /// (see <see cref="RunMethod.ReplicateOutlierSignificance"/>); it is kept in the mean.</summary>
+    SuspectReplicate = 2048,
 }

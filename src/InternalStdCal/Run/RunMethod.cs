@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
+using InternalStdCal.Limits;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
 
@@ -24,7 +25,9 @@ public sealed class AnalyteMethod
     /// weightings (1/s², custom) are refused: which points exist is only known once invalid rows are set aside.</param>
     /// <param name="options">Calibration options; null for <see cref="CalibrationOptions.Default"/>.</param>
     /// <param name="acceptance">Acceptance rule set applied to the calibration; null for none.</param>
-    /// <param name="limits">Reporting limits (LOD/LOQ in the measured solution); null for none.</param>
+    /// <param name="limits">Reporting limits: the method's LOD/LOQ expressed in the original sample (e.g. µg/L of the
+    /// water sample, mg/kg of a solid), applied to <see cref="AnalyteResult.InSample"/>; null for none. Results in the
+    /// original sample of another kind than the limits are not censored (the result's notes say so).</param>
     /// <exception cref="ArgumentNullException">A name is null.</exception>
     /// <exception cref="ArgumentException">A name is blank, or a weighting is given for a response-factor model, or a
     /// per-point weighting is given.</exception>
@@ -74,7 +77,7 @@ public sealed class AnalyteMethod
     /// <summary>Acceptance rule set; null for none.</summary>
     public AcceptanceRuleSet? Acceptance { get; }
 
-    /// <summary>Reporting limits; null for none.</summary>
+    /// <summary>Reporting limits in the original sample (see <see cref="AnalyteResult.Reported"/>); null for none.</summary>
     public ReportingLimits? Limits { get; }
 
     /// <inheritdoc />
@@ -91,6 +94,7 @@ public sealed class AnalyteMethod
 public sealed class RunMethod
 {
     private readonly double _confidenceLevel = 0.95;
+    private readonly double _replicateOutlierSignificance = 0.05;
     private readonly InverseIntervalMethod _intervalMethod;
 
     /// <summary>Creates a method.</summary>
@@ -171,6 +175,20 @@ public sealed class RunMethod
 
     /// <summary>Window of the spike recovery ((spiked − unspiked)/added·100); null = reported but not judged.</summary>
     public RecoveryWindow? SpikeRecovery { get; init; }
+
+    /// <summary>Rule for the drift trends of the report (each IS signal and each analyte's QC recovery across injection
+    /// order, see <see cref="RunReport.Drift"/>); null (default) = no drift trends.</summary>
+    public DriftRule? Drift { get; init; }
+
+    /// <summary>Significance level α of the two-sided Grubbs test on the replicate injections of a sample (applied when
+    /// at least 3 injections are used; their ratios are tested, see <see cref="GrubbsTest"/>), in (0, 0.5).
+    /// Default 0.05. A suspect injection is flagged (<see cref="ResultQualifiers.SuspectReplicate"/>), never removed.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">Not in (0, 0.5).</exception>
+    public double ReplicateOutlierSignificance
+    {
+        get => _replicateOutlierSignificance;
+        init => _replicateOutlierSignificance = Guard.InOpenRange(value, 0, 0.5, nameof(ReplicateOutlierSignificance));
+    }
 
     /// <summary>Confidence level of result intervals, in (0, 1). Default 0.95.</summary>
     /// <exception cref="ArgumentOutOfRangeException">Not in (0, 1).</exception>

@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
+using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -27,6 +28,14 @@ namespace InternalStdCal.Run;
 /// <para><b>Brackets.</b> A failed quality-control check flags every sample injected between the previous and the next
 /// quality-control injection of the run with a nominal value of that analyte (common practice); a check that applies
 /// but cannot be computed counts as failed.</para>
+/// <para><b>Replicates.</b> With at least 3 injections of a sample used, the two-sided Grubbs test
+/// (<see cref="GrubbsTest"/>, α = <see cref="RunMethod.ReplicateOutlierSignificance"/>) is applied to their ratios; a
+/// suspect injection is flagged (<see cref="ResultQualifiers.SuspectReplicate"/>) and stays in the mean.</para>
+/// <para><b>Limits.</b> An analyte's <see cref="AnalyteMethod.Limits"/> are its LOD/LOQ in the original sample (common
+/// practice) and judge <see cref="AnalyteResult.InSample"/>, giving <see cref="AnalyteResult.Reported"/> and the
+/// below-LOD/LOQ flags; limits of another kind than a sample's result are not applied to it (noted on the result).</para>
+/// <para><b>Drift.</b> With a <see cref="RunMethod.Drift"/> rule, the report holds the trend of every IS signal and of
+/// every analyte's QC recovery across injection order (<see cref="RunReport.Drift"/>); flagged drifts are noted.</para>
 /// <para>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
 /// decide what a flag or a failed check means for the reported results.</para>
 /// </remarks>
@@ -37,8 +46,7 @@ public static class RunProcessor
     /// <param name="method">The method; its analytes and IS must be declared in the run.</param>
     /// <returns>The report.</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
-    /// <exception cref="ArgumentException">The method names an analyte or IS the run does not declare, or a reporting
-    /// limit is of another kind than the analyte's standards.</exception>
+    /// <exception cref="ArgumentException">The method names an analyte or IS the run does not declare.</exception>
     public static RunReport Process(AnalyticalRun run, RunMethod method)
     {
         Guard.NotNull(run, nameof(run));
@@ -78,6 +86,7 @@ public static class RunProcessor
         var notes = run.Analytes.Where(a => method.For(a) is null)
             .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
             .ToList();
+        List<DriftCheck> drift = Drift(run, method, qc, notes);
         return new RunReport(
             run,
             method,
@@ -88,7 +97,58 @@ public static class RunProcessor
             duplicates,
             spikes,
             state.Outcomes(),
+            drift,
             notes);
+    }
+
+    // Each IS signal over every injection where it is valid, and each analyte's QC recovery, against injection order.
+    private static List<DriftCheck> Drift(AnalyticalRun run, RunMethod method, List<QualityControlCheck> qc, List<string> notes)
+    {
+        var checks = new List<DriftCheck>();
+        if (method.Drift is not DriftRule rule)
+        {
+            return checks;
+        }
+
+        foreach (string name in run.InternalStandards)
+        {
+            RunInjection[] points = run.Injections.Where(r => r.Signals.InternalStandard(name) > 0).OrderBy(r => r.Order).ToArray();
+            checks.Add(Trend(DriftSeriesKind.InternalStandardSignal, name, points.Select(r => r.Order).ToArray(), points.Select(r => r.Signals.InternalStandard(name)!.Value).ToArray(), rule));
+        }
+
+        foreach (AnalyteMethod a in method.Analytes)
+        {
+            QualityControlCheck[] points = qc.Where(c => c.Analyte == a.Analyte && c.RecoveryPercent is not null).OrderBy(c => c.Injection.Order).ToArray();
+            checks.Add(Trend(DriftSeriesKind.QualityControlRecovery, a.Analyte, points.Select(c => c.Injection.Order).ToArray(), points.Select(c => c.RecoveryPercent!.Value).ToArray(), rule));
+        }
+
+        foreach (DriftCheck c in checks)
+        {
+            if (c.Trend is not DriftTrend t)
+            {
+                notes.Add("No drift trend for " + c + ": " + c.Failure);
+            }
+            else if (t.IsFlagged)
+            {
+                notes.Add("Drift flagged for " + c + ": " + Text.F(t.DriftOverRunPercent, 1) + " % of the mean over injections " + Text.I(c.InjectionOrders[0]) + "–"
+                    + Text.I(c.InjectionOrders[c.InjectionOrders.Count - 1]) + " (slope " + Text.G(t.Slope) + " per injection, " + Text.F(100 * rule.ConfidenceLevel, 0) + " % CI ["
+                    + Text.G(t.SlopeInterval.Lower) + ", " + Text.G(t.SlopeInterval.Upper) + "]; rule: " + rule + ").");
+            }
+        }
+
+        return checks;
+    }
+
+    private static DriftCheck Trend(DriftSeriesKind kind, string name, int[] orders, double[] values, DriftRule rule)
+    {
+        try
+        {
+            return new DriftCheck(kind, name, orders, DriftTrend.Fit(orders.Select(o => (double)o).ToArray(), values, rule), null);
+        }
+        catch (ArgumentException e)
+        {
+            return new DriftCheck(kind, name, orders, null, e.Message);
+        }
     }
 
     private sealed class RowState
@@ -142,12 +202,14 @@ public static class RunProcessor
 
         internal Concentration? SampleUpper { get; set; }
 
+        internal ReportedValue? Reported { get; set; }
+
         internal ResultQualifiers Qualifiers { get; set; }
 
         internal List<string> Notes { get; } = new();
 
         internal AnalyteResult Build() =>
-            new(Id, Role, Analyte, Rows.Select(r => r.Order).ToList(), Quantitation, InSample, SampleLower, SampleUpper, Qualifiers, Notes.ToList());
+            new(Id, Role, Analyte, Rows.Select(r => r.Order).ToList(), Quantitation, InSample, SampleLower, SampleUpper, Reported, Qualifiers, Notes.ToList());
     }
 
     private sealed class State
@@ -254,7 +316,6 @@ public static class RunProcessor
             RunInjection[] calRows = _run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank).ToArray();
             bool rf = a.Model is RatioModel.AverageResponseFactor or RatioModel.SinglePointResponseFactor;
             ConcentrationUnit? unit = calRows.Where(r => r.Nominal.ContainsKey(a.Analyte)).Select(r => (ConcentrationUnit?)r.Nominal[a.Analyte].Unit).FirstOrDefault();
-            CheckLimits(a, unit, "method");
             var standards = new List<CalibrationStandard>();
             var used = new List<RunInjection>();
             foreach (IGrouping<string, RunInjection> level in calRows.GroupBy(r => r.Id, StringComparer.Ordinal))
@@ -357,7 +418,7 @@ public static class RunProcessor
                 if (b.Quantitation is QuantitationResult q)
                 {
                     ToSample(b, q);
-                    ApplyLimits(a, b, q);
+                    ApplyLimits(a, b);
                 }
 
                 list.Add(b);
@@ -561,23 +622,38 @@ public static class RunProcessor
             }
         }
 
-        private static void ApplyLimits(AnalyteMethod a, ResultBuilder b, QuantitationResult q)
+        // Limits are the method's LOD/LOQ in the original sample (common practice), so they judge InSample.
+        private static void ApplyLimits(AnalyteMethod a, ResultBuilder b)
         {
-            if (a.Limits is not ReportingLimits limits)
+            if (b.InSample is not SampleResult inSample)
             {
                 return;
             }
 
-            Concentration c = q.Concentration;
-            if (limits.LimitOfDetection is Concentration lod && c < lod)
+            Concentration c = inSample.Result.Value;
+            if (a.Limits is not ReportingLimits limits)
+            {
+                b.Reported = new ReportedValue(c, ReportedStatus.Quantified, null);
+                return;
+            }
+
+            if (limits.QuantificationLimit.Kind != c.Kind)
+            {
+                b.Notes.Add("Reporting limits (" + limits + ") not applied: they are of kind " + limits.QuantificationLimit.Kind + ", the result in the original sample is in "
+                    + Concentration.SymbolOf(c.Unit) + " (" + c.Kind + "); not censored.");
+                return;
+            }
+
+            b.Reported = limits.Apply(c);
+            if (b.Reported.Status == ReportedStatus.NotDetected)
             {
                 b.Qualifiers |= ResultQualifiers.BelowLimitOfDetection;
-                b.Notes.Add("Below the LOD (" + lod + ") in the measured solution; value kept.");
+                b.Notes.Add("Below the LOD (" + b.Reported.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
             }
-            else if (limits.LimitOfQuantitation is Concentration loq && c < loq)
+            else if (b.Reported.Status == ReportedStatus.BelowQuantificationLimit)
             {
                 b.Qualifiers |= ResultQualifiers.BelowLimitOfQuantitation;
-                b.Notes.Add("Below the LOQ (" + loq + ") in the measured solution; value kept.");
+                b.Notes.Add("Below the LOQ (" + b.Reported.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
             }
         }
 
@@ -602,16 +678,26 @@ public static class RunProcessor
             }
         }
 
-        private static void CheckLimits(AnalyteMethod a, ConcentrationUnit? unit, string paramName)
+        // Grubbs' test on the ratios of ≥ 3 replicate injections: flags a suspect one, which stays in the mean.
+        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, List<RunInjection> used)
         {
-            if (a.Limits is ReportingLimits limits && unit is ConcentrationUnit u)
+            if (injections.Count < 3)
             {
-                Concentration l = limits.LimitOfDetection ?? limits.LimitOfQuantitation!.Value;
-                if (l.Kind != Concentration.KindOf(u))
-                {
-                    throw new ArgumentException($"Parameter '{paramName}': the reporting limits of analyte '{a.Analyte}' ({limits}) are of kind {l.Kind}, but its standards are in {Concentration.SymbolOf(u)} ({Concentration.KindOf(u)}).", paramName);
-                }
+                return;
             }
+
+            OutlierTestResult g = GrubbsTest.Evaluate(injections.Select(i => i.Ratio).ToArray(), _method.ReplicateOutlierSignificance, OutlierSide.TwoSided);
+            if (!g.IsOutlier)
+            {
+                return;
+            }
+
+            RunInjection suspect = used[g.SuspectIndex];
+            string text = "ratio " + Text.G(g.SuspectValue) + " is a suspect outlier by Grubbs' test (G = " + Text.G(g.Statistic) + " > " + Text.G(g.CriticalValue)
+                + ", n = " + Text.I(injections.Count) + ", two-sided α = " + Text.G(g.SignificanceLevel) + "); kept in the mean.";
+            b.Qualifiers |= ResultQualifiers.SuspectReplicate;
+            b.Notes.Add("Injection " + Text.I(suspect.Order) + ": " + text);
+            _rows[suspect.Order].Reasons.Add(a.Analyte + ": " + text);
         }
 
         private void Quantify(AnalyteMethod a, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
@@ -681,6 +767,7 @@ public static class RunProcessor
                 b.Notes.Add("The calibration failed " + cal.Verdict!.RuleSet.Name + ".");
             }
 
+            Outlier(a, b, injections, used);
             foreach (RunInjection r in used)
             {
                 _rows[r.Order].Set(a.Analyte, success, NonPositive(r, a));

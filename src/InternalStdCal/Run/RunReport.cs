@@ -17,7 +17,7 @@ public sealed class RunReport
 {
     private static readonly string[] Header1 = new[] { "analyte", "IS", "model", "points", "verdict" };
 
-    private static readonly string[] Header2 = new[] { "sample", "role", "analyte", "measured", "interval", "in sample", "interval", "flags" };
+    private static readonly string[] Header2 = new[] { "sample", "role", "analyte", "measured", "interval", "in sample", "interval", "reported", "flags" };
 
     private static readonly string[] Header3 = new[] { "order", "id", "analyte", "nominal", "found", "recovery %", "verdict" };
 
@@ -27,9 +27,11 @@ public sealed class RunReport
 
     private static readonly string[] Header6 = new[] { "order", "role", "id", "status", "IS recovery %", "reasons" };
 
+    private static readonly string[] Header7 = new[] { "series", "points", "slope per injection", "interval", "drift over run %", "verdict" };
+
     private static readonly bool[] Align1 = new[] { false, false, false, true, false };
 
-    private static readonly bool[] Align2 = new[] { false, false, false, true, false, true, false, false };
+    private static readonly bool[] Align2 = new[] { false, false, false, true, false, true, false, true, false };
 
     private static readonly bool[] Align3 = new[] { true, false, false, true, true, true, false };
 
@@ -38,6 +40,8 @@ public sealed class RunReport
     private static readonly bool[] Align5 = new[] { false, false, false, true, true, true, true, false };
 
     private static readonly bool[] Align6 = new[] { true, false, false, false, false, false };
+
+    private static readonly bool[] Align7 = new[] { false, true, true, false, true, false };
 
     internal RunReport(
         AnalyticalRun run,
@@ -49,6 +53,7 @@ public sealed class RunReport
         IReadOnlyList<DuplicateCheck> duplicates,
         IReadOnlyList<SpikeCheck> spikes,
         IReadOnlyList<InjectionOutcome> injections,
+        IReadOnlyList<DriftCheck> drift,
         IReadOnlyList<string> notes)
     {
         Run = run;
@@ -60,6 +65,7 @@ public sealed class RunReport
         Duplicates = duplicates;
         Spikes = spikes;
         Injections = injections;
+        Drift = drift;
         Notes = notes;
     }
 
@@ -91,7 +97,14 @@ public sealed class RunReport
     /// <summary>One status row per input injection, in injection order.</summary>
     public IReadOnlyList<InjectionOutcome> Injections { get; }
 
-    /// <summary>Run-level remarks, e.g. analytes declared in the run but not processed by the method.</summary>
+    /// <summary>Drift trends with the method's <see cref="RunMethod.Drift"/> rule: one per IS of the run (signal in every
+    /// injection where it is valid), then one per analyte of the method (QC recovery %), against injection order;
+    /// empty when the method has no drift rule. Flagged drifts and series too short for a trend are also in
+    /// <see cref="Notes"/>.</summary>
+    public IReadOnlyList<DriftCheck> Drift { get; }
+
+    /// <summary>Run-level remarks: analytes declared in the run but not processed by the method, flagged drifts, drift
+    /// series without a trend.</summary>
     public IReadOnlyList<string> Notes { get; }
 
     /// <summary>The result of one sample for one analyte.</summary>
@@ -126,11 +139,12 @@ public sealed class RunReport
         Add(ResultQualifiers.NonPositiveAnalyteSignal, "signal ≤ 0");
         Add(ResultQualifiers.DuplicateRpdExceeded, "RPD");
         Add(ResultQualifiers.SpikeRecoveryOutOfWindow, "spike recovery");
+        Add(ResultQualifiers.SuspectReplicate, "suspect replicate");
         return parts.Count == 0 ? "-" : string.Join(", ", parts);
     }
 
-    /// <summary>A readable report for the console: calibrations, results with flags, QC checks and the status of every
-    /// injection (invariant culture).</summary>
+    /// <summary>A readable report for the console: calibrations, results with the reported value and flags, QC checks,
+    /// drift trends, the status of every injection and the notes (invariant culture).</summary>
     /// <returns>Multi-line text.</returns>
     public override string ToString()
     {
@@ -167,6 +181,7 @@ public sealed class RunReport
                 Interval(r.MeasuredLower, r.MeasuredUpper),
                 Conc(r.InSample?.Value),
                 Interval(r.SampleLower, r.SampleUpper),
+                r.Reported?.ToString() ?? "n/a",
                 QualifierText(r.Qualifiers),
             });
         }
@@ -209,6 +224,28 @@ public sealed class RunReport
             }
 
             ResultText.AppendTable(sb, s, Align5);
+        }
+
+        if (Drift.Count > 0)
+        {
+            sb.AppendLine();
+            sb.Append("Drift across injection order (").Append(Method.Drift).AppendLine(")");
+            var d = new List<string[]> { Header7 };
+            foreach (DriftCheck c in Drift)
+            {
+                DriftTrend? t = c.Trend;
+                d.Add(new[]
+                {
+                    c.ToString(),
+                    Text.I(c.InjectionOrders.Count),
+                    t is null ? "-" : Text.G(t.Slope),
+                    t is null ? "-" : "[" + Text.G(t.SlopeInterval.Lower) + ", " + Text.G(t.SlopeInterval.Upper) + "]",
+                    t is null ? "-" : Text.F(t.DriftOverRunPercent, 1),
+                    t is null ? "no trend: " + c.Failure : t.IsFlagged ? "DRIFT" : "not flagged",
+                });
+            }
+
+            ResultText.AppendTable(sb, d, Align7);
         }
 
         sb.AppendLine();

@@ -30,4 +30,21 @@ public class RunMethodTests
             new RunMethod("m", new[] { pb }, new Dictionary<string, Concentration> { ["Bi"] = RunScenario.Ug(0) }, InternalStandardRecoveryWindow.UsEpa200Point8));
         Assert.Throws<ArgumentOutOfRangeException>("ConfidenceLevel", () => new RunMethod("m", new[] { pb }, Is, InternalStandardRecoveryWindow.UsEpa200Point8) { ConfidenceLevel = 1 });
     }
+
+    [Fact]
+    public void RunMethod_ReplicateOutlierSignificanceOutsideOpenZeroToHalf_Throws()
+    {
+        var pb = new AnalyteMethod("Pb", "Bi", RatioModel.Linear);
+        Assert.Throws<ArgumentOutOfRangeException>("ReplicateOutlierSignificance", () => new RunMethod("m", new[] { pb }, Is, InternalStandardRecoveryWindow.UsEpa200Point8) { ReplicateOutlierSignificance = 0.5 });
+        Assert.Throws<ArgumentOutOfRangeException>("ReplicateOutlierSignificance", () => new RunMethod("m", new[] { pb }, Is, InternalStandardRecoveryWindow.UsEpa200Point8) { ReplicateOutlierSignificance = 0 });
+    }
+
+    [Fact]
+    public void RunMethod_Defaults_NoDriftRuleAndGrubbsAtFivePercent()
+    {
+        var method = new RunMethod("m", new[] { new AnalyteMethod("Pb", "Bi", RatioModel.Linear) }, Is, InternalStandardRecoveryWindow.UsEpa200Point8);
+        Assert.Null(method.Drift);
+        Assert.Equal(0.05, method.ReplicateOutlierSignificance);
+        Assert.Null(method.Analytes[0].Limits);
+    }
 }

@@ -4,6 +4,7 @@ using System.Linq;
 using FsCheck;
 using FsCheck.Fluent;
 using FsCheck.Xunit;
+using InternalStdCal.Limits;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
 
@@ -43,7 +44,8 @@ public class RunProcessorPropertyTests
             }
 
             RunReport report = RunProcessor.Process(RunScenario.Run(permuted), RunScenario.Method());
-            return Values(report).Zip(Values(Reference), Close).All(x => x);
+            return Values(report).Zip(Values(Reference), Close).All(x => x) && Reported(report).SequenceEqual(Reported(Reference))
+                && report.Drift.Count == Reference.Drift.Count;
         });
 
     [Property(MaxTest = 50)]
@@ -55,8 +57,12 @@ public class RunProcessorPropertyTests
             bool concentrations = Values(report).Zip(Values(Reference), Close).All(x => x);
             bool recoveries = report.Injections.SelectMany(o => o.InternalStandardRecoveries.Select(x => x.RecoveryPercent ?? -1))
                 .Zip(Reference.Injections.SelectMany(o => o.InternalStandardRecoveries.Select(x => x.RecoveryPercent ?? -1)), Close).All(x => x);
-            return concentrations && recoveries
-                && report.Results.Select(r => r.Qualifiers).SequenceEqual(Reference.Results.Select(r => r.Qualifiers));
+            // Drift in % of the series mean is scale-free, so the IS trends and every flag stay the same.
+            bool drift = report.Drift.Select(d => d.Trend?.DriftOverRunPercent ?? -1).Zip(Reference.Drift.Select(d => d.Trend?.DriftOverRunPercent ?? -1), Close).All(x => x)
+                && report.Drift.Select(d => d.IsFlagged).SequenceEqual(Reference.Drift.Select(d => d.IsFlagged));
+            return concentrations && recoveries && drift
+                && report.Results.Select(r => r.Qualifiers).SequenceEqual(Reference.Results.Select(r => r.Qualifiers))
+                && Reported(report).SequenceEqual(Reported(Reference));
         });
 
     [Property(MaxTest = 100)]
@@ -97,6 +103,31 @@ public class RunProcessorPropertyTests
             return everyRow && damagedExcluded && damagedSamplesFlagged && everySample;
         });
 
+    [Property(MaxTest = 50)]
+    public Property Process_ReplicateOutlierFlag_NeverRemovesAnInjectionAndIgnoresIsScale() =>
+        Prop.ForAll(Seeds, seed =>
+        {
+            // n = 3–8 replicate injections of an extra sample, Pb ratios around 0.22, sometimes one far off.
+            var random = new Random(seed);
+            int n = random.Next(3, 9);
+            double[] pb = Enumerable.Range(0, n).Select(_ => 22000 + random.Next(-500, 501)).Select(x => (double)x).ToArray();
+            if (random.Next(2) == 0)
+            {
+                pb[random.Next(n)] = 30000;
+            }
+
+            List<RunInjection> rows = RunScenario.Rows();
+            rows.AddRange(pb.Select((x, k) => RunInjection.Sample(18 + k, "S9", RunScenario.Signals(x, 100000, 15000, 50000))));
+            RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+            RunReport scaled = RunProcessor.Process(RunScenario.Run(rows.Select(r => Rebuild(r, r.Order, ScaleIs(r.Signals, 3.7))).ToList()), RunScenario.Method());
+            AnalyteResult r = report.ResultFor("S9", "Pb")!;
+            bool expected = GrubbsTest.Evaluate(pb.Select(x => x / 100000).ToArray(), 0.05, OutlierSide.TwoSided).IsOutlier;
+            return r.Quantitation!.Replicates == n
+                && report.Injections.Where(o => o.Injection.Id == "S9").All(o => o.AnalyteStatuses["Pb"] == InjectionStatus.Quantified)
+                && r.Has(ResultQualifiers.SuspectReplicate) == expected
+                && scaled.ResultFor("S9", "Pb")!.Qualifiers == r.Qualifiers;
+        });
+
     internal static RunInjection Rebuild(RunInjection r, int order, InjectionSignals signals) => r.Role switch
     {
         InjectionRole.CalibrationStandard => RunInjection.CalibrationStandard(order, r.Id, Copy(r.Nominal), signals, r.AcquiredAt),
@@ -123,9 +154,16 @@ public class RunProcessorPropertyTests
     }
 
     private static IEnumerable<string> Summary(RunReport report) =>
-        report.Results.Select(r => r.SampleId + "|" + r.Analyte + "|" + (r.InMeasuredSolution?.Value.ToString("R", null) ?? "-") + "|" + (r.InSample?.Value.Value.ToString("R", null) ?? "-") + "|" + r.Qualifiers)
+        report.Results.Select(r => r.SampleId + "|" + r.Analyte + "|" + (r.InMeasuredSolution?.Value.ToString("R", null) ?? "-") + "|" + (r.InSample?.Value.Value.ToString("R", null) ?? "-") + "|" + r.Reported + "|" + r.Qualifiers)
             .Concat(report.QualityControl.Select(c => c.Injection.Order + "|" + c.Analyte + "|" + c.RecoveryPercent?.ToString("R", null)))
-            .Concat(report.Injections.Select(o => o.Injection.Order + "|" + o.Status + "|" + string.Join(";", o.Reasons)));
+            .Concat(report.Injections.Select(o => o.Injection.Order + "|" + o.Status + "|" + string.Join(";", o.Reasons)))
+            .Concat(report.Drift.Select(d => d + "|" + string.Join(",", d.InjectionOrders) + "|" + d.Trend?.Slope.ToString("R", null) + "|" + d.IsFlagged))
+            .Concat(report.Notes);
+
+    // Reported status of every result by id and analyte ("-" without a reported value).
+    private static IEnumerable<string> Reported(RunReport report) =>
+        report.Results.OrderBy(r => r.SampleId, StringComparer.Ordinal).ThenBy(r => r.Analyte, StringComparer.Ordinal)
+            .Select(r => r.Reported?.Status.ToString() ?? "-");
 
     // Every concentration of the report in a fixed order (results by id and analyte, then QC by id and nominal); −1 for none.
     private static IEnumerable<double> Values(RunReport report) =>

@@ -2,6 +2,8 @@ using System;
 using System.Collections.Generic;
 using System.Linq;
 using InternalStdCal.Calibration;
+using InternalStdCal.Limits;
+using InternalStdCal.Preparation;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
 using Xunit;
@@ -146,7 +148,8 @@ public class RunProcessorTests
     [Fact]
     public void Process_Scenario_QualifiersAsDesigned()
     {
-        // Limits: Pb LOD 0.1, LOQ 0.3 µg/L; Cd LOD 0.05, LOQ 0.15 µg/L (measured solution).
+        // Limits: Pb LOD 0.1, LOQ 0.3 µg/L; Cd LOD 0.05, LOQ 0.15 µg/L, in the original sample (the solid S2, in mg/kg,
+        // is not censored by limits in µg/L).
         Assert.Equal(ResultQualifiers.BelowLimitOfDetection | ResultQualifiers.Extrapolated, Report.ResultFor("MB", "Pb")!.Qualifiers); // 0.05 < 0.1 and < 1
         Assert.Equal(ResultQualifiers.None, Report.ResultFor("S1", "Pb")!.Qualifiers);
         Assert.Equal(ResultQualifiers.InternalStandardRecoveryOutOfWindow, Report.ResultFor("S3", "Pb")!.Qualifiers); // Bi 55000/100000 = 55 % < 60 %
@@ -156,7 +159,9 @@ public class RunProcessorTests
         const ResultQualifiers Qc = ResultQualifiers.QualityControlFailureInBracket;
         Assert.Equal(Qc | ResultQualifiers.BelowLimitOfDetection | ResultQualifiers.Extrapolated, Report.ResultFor("MB", "Cd")!.Qualifiers);
         Assert.Equal(Qc, Report.ResultFor("S1", "Cd")!.Qualifiers);
-        Assert.Equal(Qc | ResultQualifiers.BelowLimitOfQuantitation | ResultQualifiers.Extrapolated, Report.ResultFor("S2", "Cd")!.Qualifiers); // 0.05 ≤ 0.1 < 0.15; 0.1 < 0.5
+        Assert.Equal(Qc | ResultQualifiers.Extrapolated, Report.ResultFor("S2", "Cd")!.Qualifiers); // 0.1 µg/L measured < 0.5
+        Assert.Null(Report.ResultFor("S2", "Cd")!.Reported);
+        Assert.Contains(Report.ResultFor("S2", "Cd")!.Notes, n => n.StartsWith("Reporting limits (LOD 0.05 µg/L, LOQ 0.15 µg/L) not applied", StringComparison.Ordinal));
         Assert.Equal(Qc | ResultQualifiers.NotQuantified | ResultQualifiers.MissingOrInvalidSignal, Report.ResultFor("S3", "Cd")!.Qualifiers); // Cd signal missing
         Assert.Equal(Qc | ResultQualifiers.NotQuantified | ResultQualifiers.MissingOrInvalidSignal, Report.ResultFor("S4", "Cd")!.Qualifiers); // In signal 0
         Assert.Equal(Qc, Report.ResultFor("S5", "Cd")!.Qualifiers);
@@ -224,7 +229,9 @@ public class RunProcessorTests
         string text = Report.ToString();
         Assert.Contains("Calibrations", text, StringComparison.Ordinal);
         Assert.Contains("QC bracket", text, StringComparison.Ordinal);
-        Assert.Contains("<LOQ", text, StringComparison.Ordinal);
+        Assert.Contains("<LOD", text, StringComparison.Ordinal);
+        Assert.Contains("< 0.10 µg/L (LOD)", text, StringComparison.Ordinal);
+        Assert.Contains("Drift across injection order", text, StringComparison.Ordinal);
         Assert.Contains("Injections", text, StringComparison.Ordinal);
         Assert.Contains("FAIL (test QC window", text, StringComparison.Ordinal);
     }
@@ -249,15 +256,52 @@ public class RunProcessorTests
     }
 
     [Fact]
-    public void Process_LimitsOfAnotherKind_ThrowsNamingTheAnalyte()
+    public void Process_LimitsInMassFraction_CensorTheSolidAndAreNotedOnLiquids()
     {
+        // Limits in mg/kg are the method's limits in the original solid sample: S2 Pb = 6 mg/kg (hand value above) is
+        // below an LOQ of 8 mg/kg; liquid results (µg/L) are of another kind and keep their value uncensored, with a note.
+        RunMethod method = WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.Linear, limits: new ReportingLimits(Concentration.FromMilligramsPerKilogram(2), Concentration.FromMilligramsPerKilogram(8))));
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), method);
+        AnalyteResult s2 = report.ResultFor("S2", "Pb")!;
+        Assert.Equal(ReportedStatus.BelowQuantificationLimit, s2.Reported!.Status);
+        Assert.Equal(s2.InSample!.Value.Value, s2.Reported.Estimate);
+        Assert.Equal("< 8.0 mg/kg (LOQ)", s2.Reported.ToString());
+        Assert.True(s2.Has(ResultQualifiers.BelowLimitOfQuantitation));
+        AnalyteResult s1 = report.ResultFor("S1", "Pb")!;
+        Assert.Null(s1.Reported);
+        Assert.False(s1.Has(ResultQualifiers.BelowLimitOfQuantitation));
+        Assert.Contains(s1.Notes, n => n.Contains("not applied", StringComparison.Ordinal) && n.Contains("MassFraction", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Process_LimitsInTheSampleUnit_JudgeTheOriginalSampleNotTheMeasuredSolution()
+    {
+        // Cd LOQ 5 µg/L: S1 is 1.5 µg/L measured but 15 µg/L in the sample (tenfold dilution) → quantified;
+        // S5 (undiluted) is 3 µg/L → "< LOQ"; MB 0.02 µg/L < LOD 1 µg/L → not detected (hand values above).
+        RunMethod m = RunScenario.Method();
         var method = new RunMethod(
-            "m",
-            new[] { new AnalyteMethod("Pb", "Bi", RatioModel.Linear, limits: new ReportingLimits(Concentration.FromMilligramsPerKilogram(0.1), null)) },
-            new Dictionary<string, Concentration> { ["Bi"] = RunScenario.IsConcentration },
-            InternalStandardRecoveryWindow.UsEpa200Point8);
-        ArgumentException e = Assert.Throws<ArgumentException>("method", () => RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), method));
-        Assert.Contains("'Pb'", e.Message, StringComparison.Ordinal);
+            m.Name,
+            new[] { m.Analytes[0], new AnalyteMethod("Cd", "In", RatioModel.Linear, limits: new ReportingLimits(RunScenario.Ug(1), RunScenario.Ug(5))) },
+            m.InternalStandardConcentrations,
+            m.RecoveryWindow);
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), method);
+        Assert.Equal(ReportedStatus.Quantified, report.ResultFor("S1", "Cd")!.Reported!.Status);
+        Assert.Equal(ReportedStatus.BelowQuantificationLimit, report.ResultFor("S5", "Cd")!.Reported!.Status);
+        Assert.Equal("< 5.0 µg/L (LOQ)", report.ResultFor("S5", "Cd")!.Reported!.ToString());
+        AnalyteResult mb = report.ResultFor("MB", "Cd")!;
+        Assert.True(mb.Reported!.IsNotDetected);
+        Assert.Equal(ResultQualifiers.BelowLimitOfDetection | ResultQualifiers.Extrapolated, mb.Qualifiers);
+        AssertClose(0.02, mb.Reported.Estimate.Value); // raw estimate kept
+    }
+
+    [Fact]
+    public void Process_NoLimits_ReportsTheSampleValueAsQuantified()
+    {
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.Linear)));
+        AnalyteResult mb = report.ResultFor("MB", "Pb")!;
+        Assert.Equal(ReportedStatus.Quantified, mb.Reported!.Status);
+        Assert.Equal(mb.InSample!.Value.Value, mb.Reported.Estimate);
+        Assert.Null(report.ResultFor("S3", "Cd")!.Reported); // not quantified
     }
 
     [Fact]
@@ -375,6 +419,147 @@ public class RunProcessorTests
         RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
         Assert.True(report.ResultFor("S1", "Cd")!.Has(ResultQualifiers.QualityControlFailureInBracket));
         Assert.Equal(InjectionStatus.Excluded, report.Injections.Single(o => o.Injection.Id == "PB-CHK").AnalyteStatuses["Cd"]);
+    }
+
+    [Fact]
+    public void Process_LinearIsDecline_ShowsTheSlopeAndFlagsTheDrift()
+    {
+        // Bi set to 100000 − 1000·order in every row (Pb signal scaled with it, so every ratio is kept): the points lie
+        // exactly on a line, so OLS returns slope −1000 per injection with s_b = 0 (field-reference §1.1). Orders 1–17:
+        // mean = 100000 − 1000·9 = 91000; drift over the run = −1000·16 = −16000 = −17.5824 % of the mean (COMPUTED by hand).
+        List<RunInjection> rows = RunScenario.Rows().Select(r =>
+        {
+            double bi = 100000 - (1000.0 * r.Order);
+            double scale = bi / r.Signals.InternalStandard("Bi")!.Value;
+            return RunProcessorPropertyTests.Rebuild(r, r.Order, RunScenario.Signals(r.Signals.Analyte("Pb") * scale, bi, r.Signals.Analyte("Cd"), r.Signals.InternalStandard("In")));
+        }).ToList();
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        DriftCheck bi = report.Drift.Single(d => d.Kind == DriftSeriesKind.InternalStandardSignal && d.Name == "Bi");
+        Assert.Equal(Enumerable.Range(1, 17), bi.InjectionOrders);
+        AssertClose(-1000, bi.Trend!.Slope);
+        AssertClose(-1600.0 / 91, bi.Trend.DriftOverRunPercent);
+        Assert.True(bi.IsFlagged);
+        Assert.Contains(report.Notes, n => n.StartsWith("Drift flagged for IS Bi signal: -17.6 % of the mean over injections 1–17", StringComparison.Ordinal));
+        Assert.Contains("DRIFT", report.ToString(), StringComparison.Ordinal);
+        AssertClose(30, report.ResultFor("S1", "Pb")!.InSample!.Value.Value.Value); // ratios kept → same result
+    }
+
+    [Fact]
+    public void Process_ConstantIs_IsNotFlagged()
+    {
+        // Every IS signal set to one constant (analyte signals scaled to keep the ratios): no slope, no flag, even with
+        // the strictest rule (significance alone).
+        List<RunInjection> rows = RunScenario.Rows().Select(r =>
+        {
+            double? inSignal = r.Signals.InternalStandard("In");
+            double? cd = r.Signals.Analyte("Cd") is double c && inSignal > 0 ? c * 50000 / inSignal : r.Signals.Analyte("Cd");
+            return RunProcessorPropertyTests.Rebuild(r, r.Order, RunScenario.Signals(r.Signals.Analyte("Pb") * 100000 / r.Signals.InternalStandard("Bi"), 100000, cd, inSignal > 0 ? 50000 : inSignal));
+        }).ToList();
+        RunMethod m = RunScenario.Method();
+        var method = new RunMethod(m.Name, m.Analytes, m.InternalStandardConcentrations, m.RecoveryWindow) { Drift = DriftRule.Significance() };
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), method);
+        DriftCheck[] isChecks = report.Drift.Where(d => d.Kind == DriftSeriesKind.InternalStandardSignal).ToArray();
+        Assert.Equal(new[] { "Bi", "In" }, isChecks.Select(d => d.Name));
+        Assert.All(isChecks, d => Assert.False(d.IsFlagged));
+        Assert.All(isChecks, d => Assert.False(d.Trend!.IsSlopeSignificant));
+        Assert.Equal(16, isChecks[1].InjectionOrders.Count); // In is 0 (invalid) in S4, order 14
+        Assert.DoesNotContain(report.Notes, n => n.StartsWith("Drift flagged for IS", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Process_QcRecoveryTrend_MatchesHandComputedSlope()
+    {
+        // Pb QC recoveries 102, 96, 100 % at orders 7, 15, 17: x̄ = 13, Sxx = 36 + 4 + 16 = 56,
+        // Sxy = −6·102 + 2·96 + 4·100 = −20 → b = −5/14 % per injection; Cd 100, 80, 105 % gives Sxy = −20 too
+        // (OLS slope, field-reference §1.1, COMPUTED by hand).
+        DriftCheck pb = Report.Drift.Single(d => d.Kind == DriftSeriesKind.QualityControlRecovery && d.Name == "Pb");
+        DriftCheck cd = Report.Drift.Single(d => d.Kind == DriftSeriesKind.QualityControlRecovery && d.Name == "Cd");
+        Assert.Equal(new[] { 7, 15, 17 }, pb.InjectionOrders);
+        AssertClose(-5.0 / 14, pb.Trend!.Slope, 1e-8);
+        AssertClose(-5.0 / 14, cd.Trend!.Slope, 1e-8);
+        Assert.Equal("Pb QC recovery %", pb.ToString());
+    }
+
+    [Fact]
+    public void Process_TooFewQcPoints_NotesWhyThereIsNoTrend()
+    {
+        List<RunInjection> rows = RunScenario.Rows().Where(r => r.Order != 17).ToList();
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        DriftCheck pb = report.Drift.Single(d => d.Kind == DriftSeriesKind.QualityControlRecovery && d.Name == "Pb");
+        Assert.Null(pb.Trend);
+        Assert.False(pb.IsFlagged);
+        Assert.Contains("at least 3", pb.Failure, StringComparison.Ordinal);
+        Assert.Contains(report.Notes, n => n.StartsWith("No drift trend for Pb QC recovery %", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Process_NoDriftRule_NoDriftChecks()
+    {
+        RunReport report = RunProcessor.Process(RunScenario.Run(RunScenario.Rows()), WithPb(new AnalyteMethod("Pb", "Bi", RatioModel.Linear)));
+        Assert.Empty(report.Drift);
+        Assert.DoesNotContain("Drift across", report.ToString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Process_FiveReplicatesWithOneFarOff_FlagsTheSuspectAndKeepsItInTheMean()
+    {
+        // S8: Pb ratios 0.22, 0.22, 0.22, 0.22, 0.30 (Bi 100000). Mean 0.236, s = sqrt((4·0.016² + 0.064²)/4) = 0.0357771,
+        // G = 0.064/0.0357771 = 4/√5 = 1.78885 > G_crit(α = 0.05, n = 5, two-sided) = 1.7150 (field-reference §5.1, VERIFIED).
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22000, 30000, 22000, 22000 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        AnalyteResult r = report.ResultFor("S8", "Pb")!;
+        Assert.True(r.Has(ResultQualifiers.SuspectReplicate));
+        Assert.Equal(5, r.Quantitation!.Replicates); // flagged, not removed
+        AssertClose((0.236 - PbIntercept) / PbSlope, r.InMeasuredSolution!.Value.Value);
+        Assert.Contains(r.Notes, n => n.StartsWith("Injection 20: ratio 0.3 is a suspect outlier by Grubbs' test (G = 1.78885 > 1.71", StringComparison.Ordinal));
+        InjectionOutcome suspect = report.Injections.Single(o => o.Injection.Order == 20);
+        Assert.Equal(InjectionStatus.Quantified, suspect.AnalyteStatuses["Pb"]);
+        Assert.Contains(suspect.Reasons, t => t.StartsWith("Pb: ratio 0.3 is a suspect outlier", StringComparison.Ordinal));
+        Assert.False(report.ResultFor("S8", "Cd")!.Has(ResultQualifiers.SuspectReplicate)); // identical Cd ratios: G = 0
+        Assert.Contains("suspect replicate", report.ToString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Process_ReplicatesWithinNormalScatter_AreNotFlagged()
+    {
+        // Ratios 0.2200, 0.2210, 0.2190, 0.2205: mean 0.220125, deviations −0.000125, 0.000875, −0.001125, 0.000375,
+        // s = sqrt(2.1875e-6/3) = 0.000853913, G = 0.001125/0.000853913 = 1.3175 < 1.4812 (n = 4, α = 0.05, field-reference §5.1).
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22100, 21900, 22050 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), RunScenario.Method());
+        Assert.False(report.ResultFor("S8", "Pb")!.Has(ResultQualifiers.SuspectReplicate));
+    }
+
+    [Theory]
+    // Ratios 0.22, 0.22, 0.205, 0.235, 0.22, 0.30: mean 1.4/6 = 0.2333333, SS = 3·0.0133333² + 0.0283333² + 0.0016667² + 0.0666667²
+    // = 0.00578333, s = sqrt(SS/5) = 0.0340098, G = 0.0666667/0.0340098 = 1.96022: above G_crit(n = 6) = 1.8871 at α = 0.05,
+    // below 1.9728 at α = 0.01 (two-sided, field-reference §5.1, VERIFIED).
+    [InlineData(0.05, true)]
+    [InlineData(0.01, false)]
+    public void Process_ReplicateOutlierSignificance_DecidesTheFlag(double alpha, bool flagged)
+    {
+        List<RunInjection> rows = RunScenario.Rows();
+        double[] pb = { 22000, 22000, 20500, 23500, 22000, 30000 };
+        for (int k = 0; k < pb.Length; k++)
+        {
+            rows.Add(RunInjection.Sample(18 + k, "S8", RunScenario.Signals(pb[k], 100000, 15000, 50000)));
+        }
+
+        RunMethod m = RunScenario.Method();
+        var method = new RunMethod(m.Name, m.Analytes, m.InternalStandardConcentrations, m.RecoveryWindow) { ReplicateOutlierSignificance = alpha };
+        RunReport report = RunProcessor.Process(RunScenario.Run(rows), method);
+        Assert.Equal(flagged, report.ResultFor("S8", "Pb")!.Has(ResultQualifiers.SuspectReplicate));
     }
 
     private static RunMethod WithPb(AnalyteMethod pb, bool withCd = true) =>

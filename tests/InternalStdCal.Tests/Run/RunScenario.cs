@@ -1,5 +1,6 @@
 using System.Collections.Generic;
 using InternalStdCal.Calibration;
+using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
@@ -93,5 +94,6 @@ internal static class RunScenario
         QualityControlRecovery = new RecoveryWindow("test QC window", "invented for this test", 90, 110),
         DuplicateRpd = new RpdLimit("test RPD limit", "invented for this test", 20),
         SpikeRecovery = new RecoveryWindow("test spike window", "invented for this test", 75, 125),
+        Drift = DriftRule.MagnitudeAndSignificance(10),
     };
 }
