@@ -8,8 +8,10 @@ using System.IO;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.IO;
+using InternalStdCal.Limits;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
+using InternalStdCal.Uncertainty;
 
 namespace InternalStdCal.Samples;
 
@@ -45,8 +47,8 @@ internal static class QuantifyDemo
             return 1;
         }
 
-        // 2. The method: which IS corrects which analyte, the calibration function, and the acceptance and QC
-        //    criteria. The numbers are those of an invented lab SOP, not of a published method.
+        // 2. The method: which IS corrects which analyte, the calibration function, the acceptance and QC criteria,
+        //    and the LOD/LOQ in the original sample. The numbers are those of an invented lab SOP, not a published method.
         const string Sop = "invented demo SOP (common practice)";
         var calibrationRules = new AcceptanceRuleSet("Demo SOP calibration", Sop)
         {
@@ -58,9 +60,9 @@ internal static class QuantifyDemo
             "Demo SOP: trace metals in river water",
             new[]
             {
-                new AnalyteMethod("Cd-111", "Rh-103", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.02), Ug(0.06))),
-                new AnalyteMethod("Cu-63", "Rh-103", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.1), Ug(0.3))),
-                new AnalyteMethod("Pb-208", "Bi-209", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.05), Ug(0.15))),
+                new AnalyteMethod("Cd-111", "Rh-103", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.05), Ug(0.15))),
+                new AnalyteMethod("Cu-63", "Rh-103", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.3), Ug(1))),
+                new AnalyteMethod("Pb-208", "Bi-209", RatioModel.Linear, acceptance: calibrationRules, limits: new ReportingLimits(Ug(0.1), Ug(0.3))),
             },
             read.InternalStandardConcentrations, // from the file's header, e.g. "is:Rh-103 [10 µg/L]"
             InternalStandardRecoveryWindow.UsEpa200Point8)
@@ -68,6 +70,7 @@ internal static class QuantifyDemo
             QualityControlRecovery = new RecoveryWindow("QC recovery", Sop, 90, 110),
             DuplicateRpd = new RpdLimit("duplicate RPD", Sop, 20),
             SpikeRecovery = new RecoveryWindow("spike recovery", Sop, 75, 125),
+            Drift = DriftRule.MagnitudeOrSignificance(10), // trend of IS signals and QC recoveries over the run
         };
 
         // 3. Process: calibrate each analyte, quantify every sample, check IS recovery, QC, duplicates and spikes.
@@ -86,7 +89,7 @@ internal static class QuantifyDemo
         output.WriteLine(Row("sample", "role", "analyte", "result", "interval", "flags"));
         foreach (AnalyteResult r in report.Results.OrderBy(r => r.InjectionOrders[0]).ThenBy(r => r.Analyte, StringComparer.Ordinal))
         {
-            string result = r.InSample is Measured<Concentration> m ? m.Value.ToString("G3", CultureInfo.InvariantCulture) : "n/a";
+            string result = r.Reported?.ToString() ?? "n/a"; // "< 0.15 µg/L (LOQ)" when censored; the estimate is kept
             string interval = r.SampleLower is Concentration lo && r.SampleUpper is Concentration hi
                 ? $"{Invariant(lo.Value)} to {hi.ToString("G3", CultureInfo.InvariantCulture)}"
                 : "-";
@@ -103,7 +106,23 @@ internal static class QuantifyDemo
             output.WriteLine($"  injection {o.Injection.Order} ({o.Injection.Id}): {string.Join(" ", o.Reasons)}");
         }
 
-        // 6. Write the results for other programs.
+        output.WriteLine($"Drift across injection order (flag when {method.Drift}):");
+        foreach (DriftCheck d in report.Drift)
+        {
+            string trend = d.Trend is DriftTrend t
+                ? $"{Invariant(t.DriftOverRunPercent)} % of mean over the run (CI {Invariant(t.DriftOverRunPercentInterval.Lower)} to {Invariant(t.DriftOverRunPercentInterval.Upper)} %), {(t.IsFlagged ? "FLAGGED" : "not flagged")}"
+                : "no trend: " + d.Failure;
+            output.WriteLine($"  {d}: {trend}");
+        }
+
+        // 6. The uncertainty budget of one result (GUM law of propagation), with one component of our own SOP.
+        AnalyteResult rw02 = report.ResultFor("RW-02", "Pb-208")!;
+        var matrix = UncertainInput.Normal("matrix factor (SOP)", 1, 0.01);
+        output.WriteLine();
+        output.WriteLine("Uncertainty budget, RW-02 Pb-208 in the original sample:");
+        output.Write(rw02.UncertaintyBudget(new[] { matrix }));
+
+        // 7. Write the results for other programs.
         Directory.CreateDirectory(outputFolder);
         RunResults results = RunResults.From(report);
         string json = Path.Combine(outputFolder, read.Run.Name + "-results.json");
@@ -124,7 +143,7 @@ internal static class QuantifyDemo
     private static string Invariant(double value) => value.ToString("G3", CultureInfo.InvariantCulture);
 
     private static string Row(string sample, string role, string analyte, string result, string interval, string flags) =>
-        $"{sample,-8}{role,-17}{analyte,-9}{result,14}  {interval,-25} {flags}";
+        $"{sample,-8}{role,-17}{analyte,-9}{result,19}  {interval,-25} {flags}";
 
     // The run file: searched for in samples/data above the program's folder, then above the current folder.
     private static string? FindRunFile()
