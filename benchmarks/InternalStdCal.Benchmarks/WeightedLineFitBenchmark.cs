@@ -1,33 +1,33 @@
 using System;
 using BenchmarkDotNet.Attributes;
 using InternalStdCal.Calibration;
+using MathNet.Numerics;
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.LinearRegression;
 
 namespace InternalStdCal.Benchmarks;
 
-/// <summary>1/x-weighted straight-line fit of n standards: the library against a closed-form Σ loop (the floor)
-/// and MathNet.Numerics' weighted regression. Invented, fixed-seed data.</summary>
+/// <summary>
+/// Group 1. 1/x-weighted straight-line fit of n standards: the library against a closed-form Σ loop (the floor:
+/// weights precomputed, two passes, slope only, no validation, copies or statistics) and MathNet.Numerics
+/// (WeightedRegression.Weighted; Fit.Line, which is unweighted). Invented, fixed-seed data.
+/// </summary>
 public class WeightedLineFitBenchmark
 {
     private double[] x = Array.Empty<double>();
     private double[] y = Array.Empty<double>();
     private double[] w = Array.Empty<double>();
 
-    [Params(8, 50)]
+    [Params(6, 8, 12, 50, 10_000)]
     public int Standards { get; set; }
 
     [GlobalSetup]
     public void Setup()
     {
-        var random = new Random(20261202);
-        x = new double[Standards];
-        y = new double[Standards];
+        (x, y) = FixedSeedData.Standards(Standards);
         w = new double[Standards];
         for (int i = 0; i < Standards; i++)
         {
-            x[i] = 0.5 * (i + 1);
-            y[i] = (0.002 + 0.0198 * x[i]) * (1 + 0.01 * (random.NextDouble() - 0.5));
             w[i] = 1 / x[i];
         }
     }
@@ -54,8 +54,17 @@ public class WeightedLineFitBenchmark
         return sxy / sxx;
     }
 
+    /// <summary>The fit (validation, copy, weights, a and b); statistics are computed on first use.</summary>
     [Benchmark]
     public double Library() => RegressionFit.Fit(x, y, CalibrationModel.Linear, Weighting.InverseX).Slope;
+
+    /// <summary>The fit plus its first use of the residual statistics (s and SE(b)).</summary>
+    [Benchmark]
+    public double LibraryWithStatistics()
+    {
+        RegressionFit fit = RegressionFit.Fit(x, y, CalibrationModel.Linear, Weighting.InverseX);
+        return fit.Slope + fit.ResidualStandardDeviation + fit.Covariance(1, 1);
+    }
 
     [Benchmark]
     public double MathNetWeightedRegression()
@@ -63,4 +72,8 @@ public class WeightedLineFitBenchmark
         Matrix<double> design = Matrix<double>.Build.Dense(x.Length, 2, (i, j) => j == 0 ? 1 : x[i]);
         return WeightedRegression.Weighted(design, Vector<double>.Build.Dense(y), Matrix<double>.Build.Diagonal(w))[1];
     }
+
+    /// <summary>MathNet's Fit.Line: unweighted (it has no weights), shown because it is the obvious call.</summary>
+    [Benchmark]
+    public double MathNetFitLineUnweighted() => Fit.Line(x, y).B;
 }

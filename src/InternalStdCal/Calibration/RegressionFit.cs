@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Threading;
 using InternalStdCal.Internal;
 
 namespace InternalStdCal.Calibration;
@@ -10,12 +11,14 @@ namespace InternalStdCal.Calibration;
 /// bands and inverse prediction (x of an unknown from its response).
 /// </summary>
 /// <remarks>
-/// <para><b>Numerics.</b> The x column is centred at the weighted mean and scaled (through the origin: scaled
-/// only); the quadratic uses the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x. The rows are multiplied by
-/// √w and solved by Householder QR; coefficients and covariance are then transformed back to the a, b, c
-/// basis, followed by one step of iterative refinement on residuals computed with compensated arithmetic.
-/// This reproduces every certified value of the NIST StRD sets Norris, Pontius, NoInt1 and NoInt2 (coefficients,
-/// their standard deviations, residual SD, R²) to at least 13 significant digits.</para>
+/// <para><b>Numerics.</b> Straight lines: closed form from weighted sums centred at the weighted means (corrected
+/// two-pass algorithm), then one refinement pass on residuals split exactly (TwoSum/TwoProduct), the intercept
+/// formed with compensated arithmetic; the fit allocates only the copies of x and y and the weights. Quadratic: the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x, rows multiplied by √w
+/// and solved by Householder QR, coefficients and covariance transformed back to the a, b, c basis, followed
+/// by one step of iterative refinement on residuals computed with compensated arithmetic (the lines fall back
+/// to this path if a sum overflows or underflows). Residual statistics and the list properties are computed on
+/// first use. This reproduces every certified value of the NIST StRD sets Norris, Pontius, NoInt1 and NoInt2
+/// (coefficients, their standard deviations, residual SD, R²) to at least 13 significant digits.</para>
 /// <para><b>Formulas.</b> Ordinary and weighted least squares as in ISO 8466-1/-2 and Miller &amp; Miller,
 /// "Statistics and Chemometrics for Analytical Chemistry", ch. 5 (weighted form: Harvey, "Modern Analytical
 /// Chemistry", eqs 5.23–5.24). Weights are normalised to Σw = n; every statistic is invariant to rescaling all
@@ -28,73 +31,204 @@ namespace InternalStdCal.Calibration;
 /// </remarks>
 public sealed class RegressionFit
 {
+    // x, y and normalised weights of the standards (three arrays: below the large-object threshold up to ~10⁴ points).
     private readonly double[] _x;
     private readonly double[] _y;
-    private readonly double[] _weights;
-    private readonly double[] _coefficients;
-    private readonly double[] _standardErrors;
-    private readonly double[] _fitted;
-    private readonly double[] _residuals;
-    private readonly double[] _weightedResiduals;
-    private readonly double[] _standardizedResiduals;
-    private readonly double[] _leverages;
+    private readonly double[] _w;
 
-    // Fit in the centred/scaled basis z(x): coefficients θ and R⁻¹ of the √w-scaled design.
-    private readonly double[] _theta;
-    private readonly double[,] _rInverse;
+    // Assigned during construction only (the constructor's helper methods set them): coefficients in the
+    // order of Coefficients; θ and the upper-triangular R⁻¹ of the √w-scaled design in the basis z(x) (see
+    // Basis), with (a, b, c) = M·θ and Cov(a, b, c) = s²·G·Gᵀ, G = M·R⁻¹.
+    private double _beta0, _beta1, _beta2;
+    private double _theta0, _theta1, _theta2;
+    private double _r00, _r01, _r02, _r11, _r12, _r22;
+    private double _center;
+    private double _scale;
+    private double _meanX, _meanY;
 
-    // G = M·R⁻¹ where (a, b, c) = M·θ; Cov(a, b, c) = s²·G·Gᵀ.
-    private readonly double[,] _g;
-    private readonly double _center;
-    private readonly double _scale;
+    // Σw(x − c)² with normalised weights about the basis centre c (x̄w; 0 through the origin).
+    private double _sxx;
 
-    // Raw weight w_raw is normalised as (w_raw / _maxRawWeight) · _weightNormaliser.
-    private readonly double _maxRawWeight;
+    // Raw weight w_raw is normalised as w_raw · _weightScale · _weightNormaliser (_weightScale a power of 2).
+    private readonly double _weightScale;
     private readonly double _weightNormaliser;
 
-    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double[] rawWeights)
+    // Residual statistics and list views, computed on first use (benign race: every thread computes the same
+    // values; the flag or reference is published last).
+    private int _statisticsReady;
+    private double _residualSumOfSquares, _residualStandardDeviation, _rSquared, _correlation;
+    private Views? _views;
+
+    // t((1 + 0.95)/2, n − p), computed on first use; 0 until then.
+    private double _t95;
+
+    // x, y and raw weights w already multiplied by weightScale (an exact power of 2); sw, swx, swy: Σw, Σw·x,
+    // Σw·y of those weights; minX, maxX: the x range.
+    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double[] w, int n, double minX, double maxX, double weightScale, double sw, double swx, double swy)
     {
         Model = model;
         Weighting = weighting;
         _x = x;
         _y = y;
-        int n = x.Length;
-        int p = ParameterCount = model == CalibrationModel.Quadratic ? 3 : model == CalibrationModel.Linear ? 2 : 1;
+        _w = w;
+        Count = n;
+        MinX = minX;
+        MaxX = maxX;
+        ParameterCount = model == CalibrationModel.Quadratic ? 3 : model == CalibrationModel.Linear ? 2 : 1;
+        DegreesOfFreedom = n - ParameterCount;
 
-        // Normalised weights, Σw = n; scaled by the largest weight first so the sum cannot overflow.
-        _maxRawWeight = 0;
-        foreach (double w in rawWeights)
+        // Normalised weights, Σw = n (applied in the model's next pass).
+        _weightScale = weightScale;
+        _weightNormaliser = weighting.Scheme == WeightingScheme.None ? 1.0 : n / sw;
+        double meanX = swx / sw, meanY = swy / sw;
+        switch (model)
         {
-            _maxRawWeight = Math.Max(_maxRawWeight, w);
+            case CalibrationModel.Linear:
+                FitLine(meanX, meanY);
+                break;
+            case CalibrationModel.LinearThroughOrigin:
+                FitThroughOrigin(meanX, meanY);
+                break;
+            default:
+                NormaliseWeights();
+                FitQr();
+                break;
         }
+    }
 
-        double scaledSum = 0;
-        foreach (double w in rawWeights)
-        {
-            scaledSum += w / _maxRawWeight;
-        }
-
-        _weightNormaliser = n / scaledSum;
-        _weights = new double[n];
+    /// <summary>
+    /// Straight line from weighted sums centred at the provisional means c, m, with the correction terms of
+    /// the corrected two-pass algorithm (Chan, Golub &amp; LeVeque, "Algorithms for computing the sample
+    /// variance", Am. Stat. 37 (1983)); the intercept ȳw − b·x̄w is formed with compensated arithmetic. Falls back
+    /// to Householder QR if a sum overflows or underflows.
+    /// </summary>
+    private void FitLine(double c, double m)
+    {
+        double[] xs = _x, ys = _y, ws = _w;
+        int n = Count;
+        double k = _weightNormaliser;
+        double sw = 0, sdx = 0, sdy = 0, sxxAboutC = 0, sxy = 0;
         for (int i = 0; i < n; i++)
         {
-            _weights[i] = weighting.Scheme == WeightingScheme.None ? 1.0 : rawWeights[i] / _maxRawWeight * _weightNormaliser;
+            double w = ws[i] *= k;
+            double dx = xs[i] - c, dy = ys[i] - m, wdx = w * dx;
+            sw += w;
+            sdx += wdx;
+            sdy += w * dy;
+            sxxAboutC += wdx * dx;
+            sxy += wdx * dy;
         }
 
-        WeightedMeanX = WeightedMean(x, _weights);
-        WeightedMeanY = WeightedMean(y, _weights);
-        MinX = double.PositiveInfinity;
-        MaxX = double.NegativeInfinity;
-        foreach (double xi in x)
+        double shiftX = sdx / sw, shiftY = sdy / sw;
+        double sxx = sxxAboutC - (sdx * shiftX);
+        double scale = Math.Sqrt(sxx / sw);
+        double b = (sxy - (sdx * shiftY)) / sxx;
+        if (!(scale > 0) || double.IsInfinity(sxxAboutC) || double.IsNaN(b) || double.IsInfinity(b))
         {
-            MinX = Math.Min(MinX, xi);
-            MaxX = Math.Max(MaxX, xi);
+            FitQr();
+            return;
         }
 
-        _center = model == CalibrationModel.LinearThroughOrigin ? 0.0 : WeightedMeanX;
-        _scale = WeightedRms(x, _weights, _center);
+        // One step of iterative refinement in closed form: residuals about the provisional line ŷ − m =
+        // α + b·(x − c) with x − c and y − m split exactly (TwoSum) and b·(x − c) taken exactly (TwoProduct),
+        // so each residual carries one rounding; their least-squares correction (δα, δb) is added to the intercept
+        // unrounded. This keeps the intercept accurate when |b·x̄w| ≫ |a| (the usual calibration case).
+        double alpha = shiftY - (b * shiftX), swr = 0, swdxr = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double x = xs[i], y = ys[i];
+            double dx = x - c, dy = y - m, bdx = b * dx;
+            double r = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
+                + CompensatedSum.SumError(y, -m, dy) - (b * CompensatedSum.SumError(x, -c, dx)) - alpha;
+            double wr = ws[i] * r;
+            swr += wr;
+            swdxr += wr * dx;
+        }
 
-        // √w-scaled design in the basis z(x), solved by Householder QR.
+        double deltaB = (swdxr - (shiftX * swr)) / sxx;
+        double deltaAlpha = (swr / sw) - (shiftX * deltaB);
+        _meanX = c + shiftX;
+        _meanY = m + shiftY;
+        var a = default(CompensatedSum);
+        a.Add(m);
+        a.Add(alpha + deltaAlpha);
+        a.AddProduct(-b, c);
+        a.Add(-deltaB * c);
+        _beta0 = a.Value;
+        b += deltaB;
+        _beta1 = b;
+
+        // Basis (1, u), u = (x − x̄w)/s with s² = Sxx,w/Σw: the design is orthogonal and R = √Σw·I.
+        _center = _meanX;
+        _scale = scale;
+        _sxx = sxx;
+        var theta0 = default(CompensatedSum);
+        theta0.Add(_beta0);
+        theta0.AddProduct(b, _center);
+        _theta0 = theta0.Value;
+        _theta1 = b * scale;
+        _r00 = _r11 = 1 / Math.Sqrt(sw);
+    }
+
+    /// <summary>Line through the origin, b = Σw·x·y/Σw·x²; falls back to Householder QR if a sum overflows or underflows.</summary>
+    private void FitThroughOrigin(double c, double m)
+    {
+        double[] xs = _x, ys = _y, ws = _w;
+        int n = Count;
+        double k = _weightNormaliser;
+        double sw = 0, sdx = 0, sdy = 0, sxx = 0, sxy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double w = ws[i] *= k;
+            double x = xs[i], y = ys[i], wx = w * x;
+            sw += w;
+            sdx += w * (x - c);
+            sdy += w * (y - m);
+            sxx += wx * x;
+            sxy += wx * y;
+        }
+
+        double scale = Math.Sqrt(sxx / sw);
+        double b = sxy / sxx;
+        if (!(scale > 0) || double.IsInfinity(sxx) || double.IsNaN(b) || double.IsInfinity(b))
+        {
+            FitQr();
+            return;
+        }
+
+        // Basis x/s with s² = Σw·x²/Σw: R = √Σw.
+        _meanX = c + (sdx / sw);
+        _meanY = m + (sdy / sw);
+        _scale = scale;
+        _sxx = sxx;
+        _beta0 = b;
+        _theta0 = b * scale;
+        _r00 = 1 / Math.Sqrt(sw);
+    }
+
+    private void NormaliseWeights()
+    {
+        int n = Count;
+        for (int i = 0; i < n; i++)
+        {
+            _w[i] *= _weightNormaliser;
+        }
+    }
+
+    /// <summary>
+    /// General fit for every model: the √w-scaled design in the basis z(x) solved by Householder QR, transformed
+    /// back to (a, b, c), then one step of iterative refinement. Expects normalised weights.
+    /// </summary>
+    private void FitQr()
+    {
+        int n = Count, p = ParameterCount;
+        double[] x = _x, y = _y, weights = _w;
+        _meanX = WeightedMean(x, weights);
+        _meanY = WeightedMean(y, weights);
+        _center = Model == CalibrationModel.LinearThroughOrigin ? 0.0 : _meanX;
+        _scale = WeightedRms(x, weights, _center);
+        _sxx = n * _scale * _scale;
+
         var columns = new double[p][];
         for (int j = 0; j < p; j++)
         {
@@ -105,7 +239,7 @@ public sealed class RegressionFit
         var z = new double[p];
         for (int i = 0; i < n; i++)
         {
-            double sw = Math.Sqrt(_weights[i]);
+            double sw = Math.Sqrt(weights[i]);
             Basis(x[i], z);
             for (int j = 0; j < p; j++)
             {
@@ -117,90 +251,37 @@ public sealed class RegressionFit
 
         HouseholderQr qr = HouseholderQr.Solve(columns, rhs)
             ?? throw new ArgumentException(
-                FormattableString.Invariant($"The x values do not determine the {model} model: the design is numerically rank deficient (x values too close together relative to their magnitude)."),
+                FormattableString.Invariant($"The x values do not determine the {Model} model: the design is numerically rank deficient (x values too close together relative to their magnitude)."),
                 nameof(x));
-        _theta = qr.Coefficients;
-        _rInverse = qr.InverseR();
+        double[,] rInverse = qr.InverseR();
+        _r00 = rInverse[0, 0];
+        if (p > 1)
+        {
+            _r01 = rInverse[0, 1];
+            _r11 = rInverse[1, 1];
+        }
+
+        if (p > 2)
+        {
+            _r02 = rInverse[0, 2];
+            _r12 = rInverse[1, 2];
+            _r22 = rInverse[2, 2];
+        }
 
         // Back to the a, b, c basis: β = M·θ.
-        var m = BackTransform();
-        _coefficients = new double[p];
-        _g = new double[p, p];
+        double[] theta = qr.Coefficients;
+        var beta = new double[p];
         for (int i = 0; i < p; i++)
         {
-            double sum = 0;
             for (int k = 0; k < p; k++)
             {
-                sum += m[i, k] * _theta[k];
-                double gik = 0;
-                for (int l = 0; l < p; l++)
-                {
-                    gik += m[i, l] * _rInverse[l, k];
-                }
-
-                _g[i, k] = gik;
+                beta[i] += M(i, k) * theta[k];
             }
-
-            _coefficients[i] = sum;
         }
 
-        Refine(m);
-
-        _fitted = new double[n];
-        _residuals = new double[n];
-        _weightedResiduals = new double[n];
-        _leverages = new double[n];
-        double rss = 0;
-        for (int i = 0; i < n; i++)
-        {
-            _residuals[i] = CompensatedResidual(x[i], y[i]);
-            _fitted[i] = -CompensatedResidual(x[i], 0);
-            _weightedResiduals[i] = Math.Sqrt(_weights[i]) * _residuals[i];
-            rss += _weightedResiduals[i] * _weightedResiduals[i];
-            _leverages[i] = Math.Min(1.0, _weights[i] * UnscaledMeanResponseVariance(x[i]));
-        }
-
-        Count = n;
-        DegreesOfFreedom = n - p;
-        ResidualSumOfSquares = rss;
-        ResidualStandardDeviation = Math.Sqrt(rss / DegreesOfFreedom);
-
-        _standardErrors = new double[p];
-        for (int i = 0; i < p; i++)
-        {
-            _standardErrors[i] = Math.Sqrt(Covariance(i, i));
-        }
-
-        _standardizedResiduals = new double[n];
-        for (int i = 0; i < n; i++)
-        {
-            double denominator = ResidualStandardDeviation * Math.Sqrt(1 - _leverages[i]);
-            _standardizedResiduals[i] = denominator > 0 && 1 - _leverages[i] > 1e-10 ? _weightedResiduals[i] / denominator : 0.0;
-        }
-
-        double total = 0;
-        for (int i = 0; i < n; i++)
-        {
-            double d = model == CalibrationModel.LinearThroughOrigin ? y[i] : y[i] - WeightedMeanY;
-            total += _weights[i] * d * d;
-        }
-
-        RSquared = total > 0 ? Math.Min(1.0, Math.Max(0.0, 1 - (rss / total))) : 0.0;
-        CorrelationCoefficient = model == CalibrationModel.Quadratic
-            ? Math.Sqrt(RSquared)
-            : Math.Sign(Slope) * Math.Sqrt(RSquared);
-
-        // Read-only views: callers cannot cast them back to the arrays.
-        X = Array.AsReadOnly(_x);
-        Y = Array.AsReadOnly(_y);
-        Weights = Array.AsReadOnly(_weights);
-        Coefficients = Array.AsReadOnly(_coefficients);
-        StandardErrors = Array.AsReadOnly(_standardErrors);
-        FittedValues = Array.AsReadOnly(_fitted);
-        Residuals = Array.AsReadOnly(_residuals);
-        WeightedResiduals = Array.AsReadOnly(_weightedResiduals);
-        StandardizedResiduals = Array.AsReadOnly(_standardizedResiduals);
-        Leverages = Array.AsReadOnly(_leverages);
+        Refine(theta, beta);
+        SetTheta(theta);
+        SetBeta(beta);
     }
 
     /// <summary>Model fitted.</summary>
@@ -219,68 +300,68 @@ public sealed class RegressionFit
     public int DegreesOfFreedom { get; }
 
     /// <summary>x of the standards as given (x units).</summary>
-    public IReadOnlyList<double> X { get; }
+    public IReadOnlyList<double> X => GetViews().X;
 
     /// <summary>y of the standards as given (y units).</summary>
-    public IReadOnlyList<double> Y { get; }
+    public IReadOnlyList<double> Y => GetViews().Y;
 
     /// <summary>Weights normalised so that Σw = n (exactly 1 each for an unweighted fit).</summary>
-    public IReadOnlyList<double> Weights { get; }
+    public IReadOnlyList<double> Weights => GetViews().Weights;
 
     /// <summary>Intercept a (y units); 0 for <see cref="CalibrationModel.LinearThroughOrigin"/>.</summary>
-    public double Intercept => Model == CalibrationModel.LinearThroughOrigin ? 0.0 : _coefficients[0];
+    public double Intercept => Model == CalibrationModel.LinearThroughOrigin ? 0.0 : _beta0;
 
     /// <summary>Slope b (y units per x unit): the linear coefficient (for the quadratic, the slope at x = 0).</summary>
-    public double Slope => Model == CalibrationModel.LinearThroughOrigin ? _coefficients[0] : _coefficients[1];
+    public double Slope => Model == CalibrationModel.LinearThroughOrigin ? _beta0 : _beta1;
 
     /// <summary>Curvature c of y = a + b·x + c·x² (y units per x unit²); 0 unless quadratic.</summary>
-    public double Curvature => Model == CalibrationModel.Quadratic ? _coefficients[2] : 0.0;
+    public double Curvature => Model == CalibrationModel.Quadratic ? _beta2 : 0.0;
 
     /// <summary>Fitted coefficients: Linear [a, b]; LinearThroughOrigin [b]; Quadratic [a, b, c].</summary>
-    public IReadOnlyList<double> Coefficients { get; }
+    public IReadOnlyList<double> Coefficients => GetViews().Coefficients;
 
     /// <summary>Standard errors of <see cref="Coefficients"/>, same order: s·√((XᵀWX)⁻¹)ᵢᵢ.</summary>
-    public IReadOnlyList<double> StandardErrors { get; }
+    public IReadOnlyList<double> StandardErrors => GetViews().StandardErrors;
 
     /// <summary>
     /// Residual standard deviation s = s_y/x = √(Σw(y − ŷ)²/(n − p)) with normalised weights (y units).
     /// 0 for a perfect fit.
     /// </summary>
-    public double ResidualStandardDeviation { get; }
+    public double ResidualStandardDeviation => Statistics()._residualStandardDeviation;
 
     /// <summary>Residual sum of squares Σw(y − ŷ)² with normalised weights (y units²).</summary>
-    public double ResidualSumOfSquares { get; }
+    public double ResidualSumOfSquares => Statistics()._residualSumOfSquares;
 
     /// <summary>
     /// Correlation coefficient r = sign(b)·√R² for the straight lines (the weighted Pearson r for a weighted
     /// line; for the line through the origin the square root of the uncentred R²); √R² (≥ 0) for the quadratic.
     /// </summary>
-    public double CorrelationCoefficient { get; }
+    public double CorrelationCoefficient => Statistics()._correlation;
 
     /// <summary>
     /// Coefficient of determination. Models with intercept: centred, 1 − RSS/Σw(y − ȳw)². Through the origin:
     /// uncentred, 1 − RSS/Σw·y² (NIST StRD NoInt convention). 0 when the responses have no variation
     /// (denominator 0).
     /// </summary>
-    public double RSquared { get; }
+    public double RSquared => Statistics()._rSquared;
 
     /// <summary>Fitted responses ŷᵢ at the standards (y units).</summary>
-    public IReadOnlyList<double> FittedValues { get; }
+    public IReadOnlyList<double> FittedValues => GetViews().FittedValues;
 
     /// <summary>Residuals yᵢ − ŷᵢ, unweighted (y units).</summary>
-    public IReadOnlyList<double> Residuals { get; }
+    public IReadOnlyList<double> Residuals => GetViews().Residuals;
 
     /// <summary>Weighted residuals √wᵢ·(yᵢ − ŷᵢ) (normalised weights).</summary>
-    public IReadOnlyList<double> WeightedResiduals { get; }
+    public IReadOnlyList<double> WeightedResiduals => GetViews().WeightedResiduals;
 
     /// <summary>
     /// Internally studentised residuals √wᵢ(yᵢ − ŷᵢ)/(s·√(1 − hᵢᵢ)) (dimensionless). Reported as 0 where the
     /// denominator vanishes (perfect fit, or a point of leverage 1 whose residual is necessarily 0).
     /// </summary>
-    public IReadOnlyList<double> StandardizedResiduals { get; }
+    public IReadOnlyList<double> StandardizedResiduals => GetViews().StandardizedResiduals;
 
     /// <summary>Leverages hᵢᵢ, diagonal of the hat matrix W^½X(XᵀWX)⁻¹XᵀW^½; each in [0, 1], summing to p.</summary>
-    public IReadOnlyList<double> Leverages { get; }
+    public IReadOnlyList<double> Leverages => GetViews().Leverages;
 
     /// <summary>Lowest x of the standards.</summary>
     public double MinX { get; }
@@ -289,15 +370,15 @@ public sealed class RegressionFit
     public double MaxX { get; }
 
     /// <summary>Weighted mean x̄w = Σw·x/Σw (the plain mean when unweighted).</summary>
-    public double WeightedMeanX { get; }
+    public double WeightedMeanX => _meanX;
 
     /// <summary>Weighted mean ȳw = Σw·y/Σw (the plain mean when unweighted).</summary>
-    public double WeightedMeanY { get; }
+    public double WeightedMeanY => _meanY;
 
     /// <summary>Weighted sum of squares of x about x̄w, Σw(x − x̄w)² with normalised weights (Sxx when unweighted).</summary>
     public double WeightedSumOfSquaresX => Model == CalibrationModel.LinearThroughOrigin
         ? SumOfSquaresAbout(WeightedMeanX)
-        : Count * _scale * _scale;
+        : _sxx;
 
     /// <summary>Fits a calibration function by (weighted) least squares.</summary>
     /// <param name="x">Concentrations (or concentration ratios) of the standards; finite.</param>
@@ -312,9 +393,29 @@ public sealed class RegressionFit
     /// weighting is undefined at a point (e.g. 1/x at x = 0); or the x values are numerically degenerate.</exception>
     public static RegressionFit Fit(IReadOnlyList<double> x, IReadOnlyList<double> y, CalibrationModel model, Weighting? weighting = null)
     {
-        double[] xs = CopyFinite(x, nameof(x));
-        double[] ys = CopyFinite(y, nameof(y));
-        Guard.SameLength(xs.Length, ys.Length, nameof(x), nameof(y));
+        weighting ??= Weighting.None;
+        if (model is CalibrationModel.Linear or CalibrationModel.LinearThroughOrigin && x is double[] xa && y is double[] ya && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length)
+            && TryFitLineFast(xa, ya, model, weighting) is RegressionFit fast)
+        {
+            return fast;
+        }
+
+        Guard.NotNull(x, nameof(x));
+        int n = x.Count;
+        var xs = new double[n];
+        var ys = new double[n];
+        CopyFinite(x, xs, nameof(x));
+        Guard.NotNull(y, nameof(y));
+        if (y.Count == n)
+        {
+            CopyFinite(y, ys, nameof(y));
+        }
+        else
+        {
+            CopyFinite(y, new double[y.Count], nameof(y));
+            Guard.SameLength(n, y.Count, nameof(x), nameof(y));
+        }
+
         int minPoints, minDistinct;
         switch (model)
         {
@@ -331,14 +432,14 @@ public sealed class RegressionFit
                 throw new ArgumentOutOfRangeException(nameof(model), model, $"Parameter '{nameof(model)}' was {model}; it must be a defined {nameof(CalibrationModel)} value.");
         }
 
-        if (xs.Length < minPoints)
+        if (n < minPoints)
         {
             throw new ArgumentException(
-                FormattableString.Invariant($"Parameter '{nameof(x)}' has {xs.Length} points; the {model} model needs at least {minPoints} so that the residual standard deviation has at least 1 degree of freedom."),
+                FormattableString.Invariant($"Parameter '{nameof(x)}' has {n} points; the {model} model needs at least {minPoints} so that the residual standard deviation has at least 1 degree of freedom."),
                 nameof(x));
         }
 
-        int distinct = CountDistinct(xs);
+        int distinct = CountDistinct(xs, minDistinct);
         if (distinct < minDistinct)
         {
             throw new ArgumentException(
@@ -346,15 +447,89 @@ public sealed class RegressionFit
                 nameof(x));
         }
 
-        weighting ??= Weighting.None;
-        if (weighting.IsPerPoint && weighting.PointValues.Count != xs.Length)
+        if (weighting.IsPerPoint && weighting.PointValues.Count != n)
         {
             throw new ArgumentException(
-                FormattableString.Invariant($"Parameter '{nameof(weighting)}' ({weighting.Name}) holds {weighting.PointValues.Count} values but there are {xs.Length} points; it must hold one per point."),
+                FormattableString.Invariant($"Parameter '{nameof(weighting)}' ({weighting.Name}) holds {weighting.PointValues.Count} values but there are {n} points; it must hold one per point."),
                 nameof(weighting));
         }
 
-        return new RegressionFit(model, weighting, xs, ys, weighting.ComputeWeights(xs, ys));
+        // Raw weights (checked), their maximum and the x range in one pass.
+        var ws = new double[n];
+        double maxRawWeight = 0, minX = double.PositiveInfinity, maxX = double.NegativeInfinity;
+        for (int i = 0; i < n; i++)
+        {
+            double xi = xs[i];
+            double w = ws[i] = weighting.PointWeight(i, xi, ys[i]);
+            maxRawWeight = Math.Max(maxRawWeight, w);
+            minX = Math.Min(minX, xi);
+            maxX = Math.Max(maxX, xi);
+        }
+
+        // Weights scaled exactly by the power of 2 that brings the largest into [1, 2): the sums cannot overflow.
+        double scale = weighting.Scheme == WeightingScheme.None ? 1.0 : PowerOfTwoScale(maxRawWeight);
+        double sw = 0, swx = 0, swy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double w = ws[i] *= scale;
+            sw += w;
+            swx += w * xs[i];
+            swy += w * ys[i];
+        }
+
+        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, scale, sw, swx, swy);
+    }
+
+    /// <summary>
+    /// One pass for straight lines given as arrays: copies x, y and the raw weights, checks them and forms Σw, Σw·x,
+    /// Σw·y. Returns null on anything unusual (a non-finite value, an undefined weight, all x equal, a sum out of
+    /// the safe range) so that the caller takes the checked path, which reports it. Raw weights are not scaled:
+    /// scaling by a power of 2 is exact, so the sums are those of the scaled path whenever they stay in range.
+    /// </summary>
+    private static RegressionFit? TryFitLineFast(double[] x, double[] y, CalibrationModel model, Weighting weighting)
+    {
+        int n = x.Length;
+        if (y.Length != n || n < (model == CalibrationModel.Linear ? 3 : 2))
+        {
+            return null;
+        }
+
+        var xs = new double[n];
+        var ys = new double[n];
+        var ws = new double[n];
+        double x0 = x[0], minX = x0, maxX = x0, sw = 0, swx = 0, swy = 0;
+        WeightingScheme scheme = weighting.Scheme;
+        for (int i = 0; i < n; i++)
+        {
+            double xi = x[i], yi = y[i];
+
+            // The common schemes inline (no call in the loop); 1/x at x ≤ 0 gives a weight ≤ 0 or ∞, refused below.
+            double w = scheme == WeightingScheme.None ? 1.0
+                : scheme == WeightingScheme.InverseX ? 1.0 / xi
+                : weighting.PointWeightOrNaN(i, xi, yi);
+
+            // x − x is 0 exactly for finite x, NaN for NaN and ±∞; w must also be > 0.
+            if (!((xi - xi) + (yi - yi) + (w - w) == 0 && w > 0))
+            {
+                return null;
+            }
+
+            xs[i] = xi;
+            ys[i] = yi;
+            ws[i] = w;
+            minX = xi < minX ? xi : minX;
+            maxX = xi > maxX ? xi : maxX;
+            sw += w;
+            swx += w * xi;
+            swy += w * yi;
+        }
+
+        if (minX == maxX || !((swx - swx) + (swy - swy) == 0 && sw > 1e-100 && sw < 1e100))
+        {
+            return null;
+        }
+
+        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, 1.0, sw, swx, swy);
     }
 
     /// <summary>Covariance of two coefficients, s²·(XᵀWX)⁻¹ in the order of <see cref="Coefficients"/>.</summary>
@@ -369,7 +544,7 @@ public sealed class RegressionFit
         double sum = 0;
         for (int k = 0; k < ParameterCount; k++)
         {
-            sum += _g[i, k] * _g[j, k];
+            sum += G(i, k) * G(j, k);
         }
 
         return ResidualStandardDeviation * ResidualStandardDeviation * sum;
@@ -414,8 +589,8 @@ public sealed class RegressionFit
     public ConfidenceInterval CoefficientInterval(int index, double confidenceLevel = 0.95)
     {
         CheckIndex(index, nameof(index));
-        double t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
-        return Symmetric(_coefficients[index], t * _standardErrors[index], confidenceLevel);
+        double t = TwoSidedT(confidenceLevel);
+        return Symmetric(Beta(index), t * Math.Sqrt(Covariance(index, index)), confidenceLevel);
     }
 
     /// <summary>
@@ -429,7 +604,7 @@ public sealed class RegressionFit
     /// <paramref name="confidenceLevel"/> outside (0, 1).</exception>
     public ConfidenceInterval MeanResponseInterval(double x, double confidenceLevel = 0.95)
     {
-        double t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
+        double t = TwoSidedT(confidenceLevel);
         return Symmetric(Predict(x), t * MeanResponseStandardError(x), confidenceLevel);
     }
 
@@ -453,8 +628,8 @@ public sealed class RegressionFit
     {
         double yHat = Predict(x);
         Guard.AtLeast(replicates, 1, nameof(replicates));
-        double t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
-        double w0 = NormalisedUnknownWeight(x, yHat, unknownWeight, out _);
+        double t = TwoSidedT(confidenceLevel);
+        double w0 = NormalisedUnknownWeight(x, yHat, unknownWeight);
         double s = ResidualStandardDeviation;
         double halfWidth = t * s * Math.Sqrt((1.0 / (replicates * w0)) + UnscaledMeanResponseVariance(x));
         return Symmetric(yHat, halfWidth, confidenceLevel);
@@ -479,10 +654,10 @@ public sealed class RegressionFit
         switch (Model)
         {
             case CalibrationModel.LinearThroughOrigin:
-                u = LinearRoot(response, _theta[0]);
+                u = LinearRoot(response, _theta0);
                 break;
             case CalibrationModel.Linear:
-                u = LinearRoot(response - _theta[0], _theta[1]);
+                u = LinearRoot(response - _theta0, _theta1);
                 break;
             default:
                 u = QuadraticRoot(response);
@@ -527,9 +702,41 @@ public sealed class RegressionFit
     /// parabola): the standard error is unbounded.</exception>
     public InversePrediction InversePredict(double meanResponse, int replicates = 1, double confidenceLevel = 0.95, double? unknownWeight = null)
     {
+        InverseEstimate e = EstimateInverse(meanResponse, replicates, confidenceLevel, unknownWeight);
+        return new InversePrediction(
+            e.Value,
+            e.StandardError,
+            e.Interval,
+            e.DegreesOfFreedom,
+            e.Replicates,
+            e.MeanResponse,
+            e.UnknownWeight,
+            e.Extrapolation,
+            InverseFormula() + "; " + WeightNote(e.Value, meanResponse, unknownWeight));
+    }
+
+    /// <summary>
+    /// The same inverse prediction as <see cref="InversePredict"/> — identical numbers, bit for bit — returned
+    /// as a struct without the <see cref="InversePrediction.Method"/> text, so that a call allocates nothing
+    /// (for high-throughput quantitation; the t quantile for P = 0.95 is computed once per fit and reused).
+    /// </summary>
+    /// <remarks>Formulas, weight of the unknown and interval as documented on <see cref="InversePredict"/>.</remarks>
+    /// <param name="meanResponse">Mean response ȳ0 of the unknown (y units); finite.</param>
+    /// <param name="replicates">Number m of responses averaged into ȳ0; ≥ 1.</param>
+    /// <param name="confidenceLevel">Confidence level P in (0, 1).</param>
+    /// <param name="unknownWeight">As for <see cref="InversePredict"/>.</param>
+    /// <returns>The prediction (x units).</returns>
+    /// <exception cref="ArgumentOutOfRangeException">meanResponse not finite or (quadratic) not reached by the
+    /// curve; replicates &lt; 1; confidenceLevel outside (0, 1); unknownWeight not finite and &gt; 0.</exception>
+    /// <exception cref="ArgumentException"><paramref name="unknownWeight"/> is null but the weighting is per-point
+    /// or undefined at x0 / ȳ0 (e.g. 1/x with x0 ≤ 0).</exception>
+    /// <exception cref="InvalidOperationException">The sensitivity at x0 is 0 (zero slope, or the vertex of the
+    /// parabola): the standard error is unbounded.</exception>
+    public InverseEstimate EstimateInverse(double meanResponse, int replicates = 1, double confidenceLevel = 0.95, double? unknownWeight = null)
+    {
         double x0 = InverseEvaluate(meanResponse);
         Guard.AtLeast(replicates, 1, nameof(replicates));
-        double t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
+        double t = TwoSidedT(confidenceLevel);
         double sensitivity = Sensitivity(x0);
         if (sensitivity == 0)
         {
@@ -537,14 +744,14 @@ public sealed class RegressionFit
                 FormattableString.Invariant($"The sensitivity dy/dx is 0 at x0 = {Guard.Format(x0)}; the standard error of an inverse prediction there is unbounded."));
         }
 
-        double w0 = NormalisedUnknownWeight(x0, meanResponse, unknownWeight, out string weightNote);
+        double w0 = NormalisedUnknownWeight(x0, meanResponse, unknownWeight);
         double s = ResidualStandardDeviation;
         double variance = ((s * s / (replicates * w0)) + (s * s * UnscaledMeanResponseVariance(x0))) / (sensitivity * sensitivity);
         double standardError = Math.Sqrt(variance);
         var status = x0 < MinX ? ExtrapolationStatus.BelowLowestStandard
             : x0 > MaxX ? ExtrapolationStatus.AboveHighestStandard
             : ExtrapolationStatus.WithinRange;
-        return new InversePrediction(
+        return new InverseEstimate(
             x0,
             standardError,
             Symmetric(x0, t * standardError, confidenceLevel),
@@ -552,8 +759,7 @@ public sealed class RegressionFit
             replicates,
             meanResponse,
             w0,
-            status,
-            InverseFormula() + "; " + weightNote);
+            status);
     }
 
     /// <summary>
@@ -584,11 +790,11 @@ public sealed class RegressionFit
 
         double x0 = InverseEvaluate(meanResponse);
         Guard.AtLeast(replicates, 1, nameof(replicates));
-        double t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
-        double w0 = NormalisedUnknownWeight(x0, meanResponse, unknownWeight, out _);
+        double t = TwoSidedT(confidenceLevel);
+        double w0 = NormalisedUnknownWeight(x0, meanResponse, unknownWeight);
         double b = Math.Abs(Slope);
         double s = ResidualStandardDeviation;
-        double sxx = Count * _scale * _scale;
+        double sxx = _sxx;
         double g = t * t * s * s / (b * b * sxx);
         if (g >= 1)
         {
@@ -605,20 +811,22 @@ public sealed class RegressionFit
     /// One step of iterative refinement: residuals of the current coefficients computed with compensated
     /// arithmetic, their least-squares correction solved with the same R (corrected semi-normal equations,
     /// Björck, "Numerical Methods for Least Squares Problems", §2.5). Removes the rounding error that the
-    /// back-transformation from the centred basis leaves in the intercept.
+    /// back-transformation from the centred basis leaves in the intercept. Updates θ and β in place.
     /// </summary>
-    private void Refine(double[,] m)
+    private void Refine(double[] theta, double[] beta)
     {
-        int p = ParameterCount;
+        SetBeta(beta);
+        int n = Count, p = ParameterCount;
         var z = new double[p];
         var g = new double[p];
-        for (int i = 0; i < _x.Length; i++)
+        for (int i = 0; i < n; i++)
         {
-            double r = CompensatedResidual(_x[i], _y[i]);
-            Basis(_x[i], z);
+            double xi = _x[i];
+            double r = CompensatedResidual(xi, _y[i]);
+            Basis(xi, z);
             for (int j = 0; j < p; j++)
             {
-                g[j] += _weights[i] * z[j] * r;
+                g[j] += _w[i] * z[j] * r;
             }
         }
 
@@ -628,7 +836,7 @@ public sealed class RegressionFit
         {
             for (int j = 0; j <= k; j++)
             {
-                v[k] += _rInverse[j, k] * g[j];
+                v[k] += RInverse(j, k) * g[j];
             }
         }
 
@@ -637,7 +845,7 @@ public sealed class RegressionFit
         {
             for (int k = i; k < p; k++)
             {
-                deltaTheta[i] += _rInverse[i, k] * v[k];
+                deltaTheta[i] += RInverse(i, k) * v[k];
             }
         }
 
@@ -646,17 +854,34 @@ public sealed class RegressionFit
             double deltaBeta = 0;
             for (int k = 0; k < p; k++)
             {
-                deltaBeta += m[i, k] * deltaTheta[k];
+                deltaBeta += M(i, k) * deltaTheta[k];
             }
 
-            double refinedTheta = _theta[i] + deltaTheta[i], refinedBeta = _coefficients[i] + deltaBeta;
+            double refinedTheta = theta[i] + deltaTheta[i], refinedBeta = beta[i] + deltaBeta;
             if (!double.IsNaN(refinedTheta + refinedBeta) && !double.IsInfinity(refinedTheta + refinedBeta))
             {
-                _theta[i] = refinedTheta;
-                _coefficients[i] = refinedBeta;
+                theta[i] = refinedTheta;
+                beta[i] = refinedBeta;
             }
         }
     }
+
+    private void SetBeta(double[] beta)
+    {
+        _beta0 = beta[0];
+        _beta1 = beta.Length > 1 ? beta[1] : 0;
+        _beta2 = beta.Length > 2 ? beta[2] : 0;
+    }
+
+    private void SetTheta(double[] theta)
+    {
+        _theta0 = theta[0];
+        _theta1 = theta.Length > 1 ? theta[1] : 0;
+        _theta2 = theta.Length > 2 ? theta[2] : 0;
+    }
+
+    /// <summary>Coefficient <paramref name="index"/> in the order of <see cref="Coefficients"/>.</summary>
+    private double Beta(int index) => index == 0 ? _beta0 : index == 1 ? _beta1 : _beta2;
 
     /// <summary>y − (a + b·x + c·x²) with compensated arithmetic (≈ one rounding of the result).</summary>
     private double CompensatedResidual(double x, double y)
@@ -666,16 +891,16 @@ public sealed class RegressionFit
         switch (Model)
         {
             case CalibrationModel.LinearThroughOrigin:
-                sum.AddProduct(-_coefficients[0], x);
+                sum.AddProduct(-_beta0, x);
                 break;
             case CalibrationModel.Linear:
-                sum.Add(-_coefficients[0]);
-                sum.AddProduct(-_coefficients[1], x);
+                sum.Add(-_beta0);
+                sum.AddProduct(-_beta1, x);
                 break;
             default:
-                sum.Add(-_coefficients[0]);
-                sum.AddProduct(-_coefficients[1], x);
-                sum.AddProductOfSquare(-_coefficients[2], x);
+                sum.Add(-_beta0);
+                sum.AddProduct(-_beta1, x);
+                sum.AddProductOfSquare(-_beta2, x);
                 break;
         }
 
@@ -703,58 +928,152 @@ public sealed class RegressionFit
         }
     }
 
-    /// <summary>M with (a, b, c) = M·θ for the basis of <see cref="Basis"/>.</summary>
-    private double[,] BackTransform()
+    /// <summary>Entry (i, k) of M with (a, b, c) = M·θ for the basis of <see cref="Basis"/>.</summary>
+    private double M(int i, int k)
     {
         double c = _center, s = _scale;
-        return Model switch
+        switch (Model)
         {
-            CalibrationModel.LinearThroughOrigin => new[,] { { 1 / s } },
-            CalibrationModel.Linear => new[,] { { 1, -c / s }, { 0, 1 / s } },
-            _ => new[,]
-            {
-                { 1, -c / s, (c / s * (c / s)) - 1 },
-                { 0, 1 / s, -2 * c / (s * s) },
-                { 0, 0, 1 / (s * s) },
-            },
-        };
+            case CalibrationModel.LinearThroughOrigin:
+                return 1 / s;
+            case CalibrationModel.Linear:
+                return i == 0 ? (k == 0 ? 1 : -c / s) : (k == 0 ? 0 : 1 / s);
+            default:
+                return (i, k) switch
+                {
+                    (0, 0) => 1,
+                    (0, 1) => -c / s,
+                    (0, 2) => (c / s * (c / s)) - 1,
+                    (1, 1) => 1 / s,
+                    (1, 2) => -2 * c / (s * s),
+                    (2, 2) => 1 / (s * s),
+                    _ => 0,
+                };
+        }
     }
 
-    /// <summary>z(x)ᵀ(RᵀR)⁻¹z(x) = ‖R⁻ᵀz(x)‖², so that Var(ŷ(x)) = s²·this.</summary>
-    private double UnscaledMeanResponseVariance(double x)
+    /// <summary>Entry (j, k) of the upper-triangular R⁻¹.</summary>
+    private double RInverse(int j, int k) => (j, k) switch
     {
-        int p = ParameterCount;
-        var z = new double[p];
-        Basis(x, z);
-        double sum = 0;
-        for (int k = 0; k < p; k++)
-        {
-            double v = 0;
-            for (int j = 0; j <= k; j++)
-            {
-                v += _rInverse[j, k] * z[j];
-            }
+        (0, 0) => _r00,
+        (0, 1) => _r01,
+        (0, 2) => _r02,
+        (1, 1) => _r11,
+        (1, 2) => _r12,
+        (2, 2) => _r22,
+        _ => 0,
+    };
 
-            sum += v * v;
+    /// <summary>Entry (i, k) of G = M·R⁻¹, so that Cov(a, b, c) = s²·G·Gᵀ.</summary>
+    private double G(int i, int k)
+    {
+        double sum = 0;
+        for (int l = 0; l <= k; l++)
+        {
+            sum += M(i, l) * RInverse(l, k);
         }
 
         return sum;
     }
 
-    /// <summary>Weight of an unknown on the normalised scale, with a note on how it was chosen.</summary>
-    private double NormalisedUnknownWeight(double x, double response, double? unknownWeight, out string note)
+    /// <summary>z(x)ᵀ(RᵀR)⁻¹z(x) = ‖R⁻ᵀz(x)‖², so that Var(ŷ(x)) = s²·this. Allocates nothing.</summary>
+    private double UnscaledMeanResponseVariance(double x)
+    {
+        double u = (x - _center) / _scale;
+        switch (Model)
+        {
+            case CalibrationModel.LinearThroughOrigin:
+                {
+                    double v0 = _r00 * u;
+                    return v0 * v0;
+                }
+
+            case CalibrationModel.Linear:
+                {
+                    double v0 = _r00, v1 = _r01 + (_r11 * u);
+                    return (v0 * v0) + (v1 * v1);
+                }
+
+            default:
+                {
+                    double z2 = (u * u) - 1;
+                    double v0 = _r00, v1 = _r01 + (_r11 * u), v2 = _r02 + (_r12 * u) + (_r22 * z2);
+                    return (v0 * v0) + (v1 * v1) + (v2 * v2);
+                }
+        }
+    }
+
+    /// <summary>Residual statistics, computed on the first call (compensated residuals of the final coefficients).</summary>
+    private RegressionFit Statistics()
+    {
+        if (Volatile.Read(ref _statisticsReady) != 0)
+        {
+            return this;
+        }
+
+        int n = Count;
+        bool origin = Model == CalibrationModel.LinearThroughOrigin;
+        double rss = 0, total = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double x = _x[i], y = _y[i], w = _w[i];
+            double weighted = Math.Sqrt(w) * CompensatedResidual(x, y);
+            rss += weighted * weighted;
+            double d = origin ? y : y - _meanY;
+            total += w * d * d;
+        }
+
+        _residualSumOfSquares = rss;
+        _residualStandardDeviation = Math.Sqrt(rss / DegreesOfFreedom);
+        _rSquared = total > 0 ? Math.Min(1.0, Math.Max(0.0, 1 - (rss / total))) : 0.0;
+        _correlation = Model == CalibrationModel.Quadratic ? Math.Sqrt(_rSquared) : Math.Sign(Slope) * Math.Sqrt(_rSquared);
+        Volatile.Write(ref _statisticsReady, 1);
+        return this;
+    }
+
+    /// <summary>t((1 + P)/2, n − p); the value for P = 0.95 is kept after its first use.</summary>
+    private double TwoSidedT(double confidenceLevel)
+    {
+        if (confidenceLevel != 0.95)
+        {
+            return StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
+        }
+
+        double t = Volatile.Read(ref _t95);
+        if (t == 0)
+        {
+            t = StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
+            Volatile.Write(ref _t95, t);
+        }
+
+        return t;
+    }
+
+    private Views GetViews()
+    {
+        Views? views = Volatile.Read(ref _views);
+        if (views is null)
+        {
+            views = new Views(this);
+            views = Interlocked.CompareExchange(ref _views, views, null) ?? views;
+        }
+
+        return views;
+    }
+
+
+    /// <summary>Weight of an unknown on the normalised scale (see <see cref="WeightNote"/> for how it is chosen).</summary>
+    private double NormalisedUnknownWeight(double x, double response, double? unknownWeight)
     {
         if (unknownWeight is double given)
         {
             Guard.Positive(given, nameof(unknownWeight));
-            note = FormattableString.Invariant($"w0 = unknownWeight {Guard.Format(given)} supplied by the caller, normalised with the standards' factor");
             return Normalise(given);
         }
 
         switch (Weighting.Scheme)
         {
             case WeightingScheme.None:
-                note = "w0 = 1 (unweighted fit)";
                 return 1.0;
             case WeightingScheme.InverseVariance:
             case WeightingScheme.Custom:
@@ -763,7 +1082,6 @@ public sealed class RegressionFit
                     nameof(unknownWeight));
         }
 
-        bool atX = Weighting.Scheme is WeightingScheme.InverseX or WeightingScheme.InverseXSquared;
         double raw;
         try
         {
@@ -780,19 +1098,45 @@ public sealed class RegressionFit
         double w0 = Normalise(raw);
         if (!(w0 > 0) || double.IsInfinity(w0))
         {
+            bool atX = Weighting.Scheme is WeightingScheme.InverseX or WeightingScheme.InverseXSquared;
             throw new ArgumentException(
                 FormattableString.Invariant($"Parameter '{nameof(unknownWeight)}' was not given and the default weight of the unknown, {Weighting.Name} at {(atX ? "x0" : "the response")}, is {Guard.Format(w0)} after normalisation; pass unknownWeight explicitly."),
                 nameof(unknownWeight));
         }
 
-        note = atX
-            ? FormattableString.Invariant($"w0 = {Weighting.Name} evaluated at x = {Guard.Format(x)}, normalised with the standards' factor")
-            : FormattableString.Invariant($"w0 = {Weighting.Name} evaluated at the response y = {Guard.Format(response)}, normalised with the standards' factor");
         return w0;
     }
 
+    /// <summary>How <see cref="NormalisedUnknownWeight"/> chose the weight (for <see cref="InversePrediction.Method"/>).</summary>
+    private string WeightNote(double x, double response, double? unknownWeight)
+    {
+        if (unknownWeight is double given)
+        {
+            return FormattableString.Invariant($"w0 = unknownWeight {Guard.Format(given)} supplied by the caller, normalised with the standards' factor");
+        }
+
+        if (Weighting.Scheme == WeightingScheme.None)
+        {
+            return "w0 = 1 (unweighted fit)";
+        }
+
+        return Weighting.Scheme is WeightingScheme.InverseX or WeightingScheme.InverseXSquared
+            ? FormattableString.Invariant($"w0 = {Weighting.Name} evaluated at x = {Guard.Format(x)}, normalised with the standards' factor")
+            : FormattableString.Invariant($"w0 = {Weighting.Name} evaluated at the response y = {Guard.Format(response)}, normalised with the standards' factor");
+    }
+
     private double Normalise(double rawWeight) =>
-        Weighting.Scheme == WeightingScheme.None ? rawWeight : rawWeight / _maxRawWeight * _weightNormaliser;
+        Weighting.Scheme == WeightingScheme.None ? rawWeight : rawWeight * _weightScale * _weightNormaliser;
+
+    /// <summary>The power of 2 that scales <paramref name="max"/> (finite, &gt; 0) into [1, 2) — exact scaling.</summary>
+    private static double PowerOfTwoScale(double max)
+    {
+        long biasedExponent = (BitConverter.DoubleToInt64Bits(max) >> 52) & 0x7FF;
+
+        // Subnormal maximum: 2^1000 keeps every scaled weight below 1 and exact; largest binade: 2^-1022 ([2, 4)).
+        long exponent = biasedExponent == 0 ? 2023L : biasedExponent == 2046 ? 1L : 2046L - biasedExponent;
+        return BitConverter.Int64BitsToDouble(exponent << 52);
+    }
 
     private string InverseFormula() => Model switch
     {
@@ -814,7 +1158,7 @@ public sealed class RegressionFit
     /// <summary>Root u of θ2·u² + θ1·u + (θ0 − θ2 − y) = 0 chosen as documented in <see cref="InverseEvaluate"/>.</summary>
     private double QuadraticRoot(double response)
     {
-        double t0 = _theta[0] - _theta[2] - response, t1 = _theta[1], t2 = _theta[2];
+        double t0 = _theta0 - _theta2 - response, t1 = _theta1, t2 = _theta2;
         if (t2 == 0)
         {
             return LinearRoot(-t0, t1);
@@ -865,10 +1209,11 @@ public sealed class RegressionFit
     private double SumOfSquaresAbout(double center)
     {
         double sum = 0;
-        for (int i = 0; i < _x.Length; i++)
+        int n = Count;
+        for (int i = 0; i < n; i++)
         {
             double d = _x[i] - center;
-            sum += _weights[i] * d * d;
+            sum += _w[i] * d * d;
         }
 
         return sum;
@@ -927,39 +1272,132 @@ public sealed class RegressionFit
         return max * Math.Sqrt(sum / x.Length);
     }
 
-    private static double[] CopyFinite(IReadOnlyList<double> values, string paramName)
+    /// <summary>Copies <paramref name="values"/> into <paramref name="target"/>, refusing NaN and ±∞.</summary>
+    private static void CopyFinite(IReadOnlyList<double> values, double[] target, string paramName)
     {
-        Guard.NotNull(values, paramName);
-        var copy = new double[values.Count];
-        for (int i = 0; i < copy.Length; i++)
+        if (values is double[] array)
         {
-            double v = values[i];
-            if (double.IsNaN(v) || double.IsInfinity(v))
+            for (int i = 0; i < array.Length; i++)
             {
-                throw new ArgumentException(
-                    FormattableString.Invariant($"Parameter '{paramName}' has {Guard.Format(v)} at index {i}; every element must be a finite number."),
-                    paramName);
+                target[i] = CheckFinite(array[i], i, paramName);
             }
-
-            copy[i] = v;
         }
-
-        return copy;
+        else
+        {
+            int count = values.Count;
+            for (int i = 0; i < count; i++)
+            {
+                target[i] = CheckFinite(values[i], i, paramName);
+            }
+        }
     }
 
-    private static int CountDistinct(double[] values)
+    private static double CheckFinite(double v, int index, string paramName)
     {
-        var sorted = (double[])values.Clone();
-        Array.Sort(sorted);
-        int distinct = sorted.Length > 0 ? 1 : 0;
-        for (int i = 1; i < sorted.Length; i++)
+        if (double.IsNaN(v) || double.IsInfinity(v))
         {
-            if (sorted[i] != sorted[i - 1])
+            throw new ArgumentException(
+                FormattableString.Invariant($"Parameter '{paramName}' has {Guard.Format(v)} at index {index}; every element must be a finite number."),
+                paramName);
+        }
+
+        return v;
+    }
+
+    /// <summary>Number of distinct values, counted up to <paramref name="cap"/> (≤ 3; exact below it).</summary>
+    private static int CountDistinct(double[] values, int cap)
+    {
+        int n = values.Length;
+        if (n == 0)
+        {
+            return 0;
+        }
+
+        double first = values[0], second = 0;
+        int distinct = 1;
+        for (int i = 1; i < n && distinct < cap; i++)
+        {
+            double v = values[i];
+            if (v == first || (distinct == 2 && v == second))
             {
-                distinct++;
+                continue;
             }
+
+            if (distinct == 1)
+            {
+                second = v;
+            }
+
+            distinct++;
         }
 
         return distinct;
+    }
+
+    /// <summary>Read-only list views of the standards and their per-point diagnostics, built on first use.</summary>
+    private sealed class Views
+    {
+        internal Views(RegressionFit fit)
+        {
+            int n = fit.Count, p = fit.ParameterCount;
+            var x = (double[])fit._x.Clone();
+            var y = (double[])fit._y.Clone();
+            var weights = (double[])fit._w.Clone();
+            var coefficients = new double[p];
+            var standardErrors = new double[p];
+            for (int i = 0; i < p; i++)
+            {
+                coefficients[i] = fit.Beta(i);
+                standardErrors[i] = Math.Sqrt(fit.Covariance(i, i));
+            }
+
+            var fitted = new double[n];
+            var residuals = new double[n];
+            var weightedResiduals = new double[n];
+            var standardized = new double[n];
+            var leverages = new double[n];
+            double s = fit.ResidualStandardDeviation;
+            for (int i = 0; i < n; i++)
+            {
+                residuals[i] = fit.CompensatedResidual(x[i], y[i]);
+                fitted[i] = -fit.CompensatedResidual(x[i], 0);
+                weightedResiduals[i] = Math.Sqrt(weights[i]) * residuals[i];
+                leverages[i] = Math.Min(1.0, weights[i] * fit.UnscaledMeanResponseVariance(x[i]));
+                double denominator = s * Math.Sqrt(1 - leverages[i]);
+                standardized[i] = denominator > 0 && 1 - leverages[i] > 1e-10 ? weightedResiduals[i] / denominator : 0.0;
+            }
+
+            // Read-only views: callers cannot cast them back to the arrays.
+            X = Array.AsReadOnly(x);
+            Y = Array.AsReadOnly(y);
+            Weights = Array.AsReadOnly(weights);
+            Coefficients = Array.AsReadOnly(coefficients);
+            StandardErrors = Array.AsReadOnly(standardErrors);
+            FittedValues = Array.AsReadOnly(fitted);
+            Residuals = Array.AsReadOnly(residuals);
+            WeightedResiduals = Array.AsReadOnly(weightedResiduals);
+            StandardizedResiduals = Array.AsReadOnly(standardized);
+            Leverages = Array.AsReadOnly(leverages);
+        }
+
+        internal IReadOnlyList<double> X { get; }
+
+        internal IReadOnlyList<double> Y { get; }
+
+        internal IReadOnlyList<double> Weights { get; }
+
+        internal IReadOnlyList<double> Coefficients { get; }
+
+        internal IReadOnlyList<double> StandardErrors { get; }
+
+        internal IReadOnlyList<double> FittedValues { get; }
+
+        internal IReadOnlyList<double> Residuals { get; }
+
+        internal IReadOnlyList<double> WeightedResiduals { get; }
+
+        internal IReadOnlyList<double> StandardizedResiduals { get; }
+
+        internal IReadOnlyList<double> Leverages { get; }
     }
 }

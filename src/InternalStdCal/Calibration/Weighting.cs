@@ -115,19 +115,7 @@ public sealed class Weighting : IEquatable<Weighting>
         var w = new double[x.Count];
         for (int i = 0; i < w.Length; i++)
         {
-            w[i] = Scheme switch
-            {
-                WeightingScheme.InverseVariance => 1.0 / (_values[i] * _values[i]),
-                WeightingScheme.Custom => _values[i],
-                _ => RawWeight(x[i], y[i], i),
-            };
-            if (!(w[i] > 0) || double.IsInfinity(w[i]))
-            {
-                throw new ArgumentException(
-                    FormattableString.Invariant(
-                        $"Weighting '{Name}' gives weight {Guard.Format(w[i])} at point {i}; weights must be finite and > 0 (the per-point value is too small or too large)."),
-                    nameof(x));
-            }
+            w[i] = PointWeight(i, x[i], y[i]);
         }
 
         return w;
@@ -175,13 +163,47 @@ public sealed class Weighting : IEquatable<Weighting>
     public override string ToString() =>
         IsPerPoint ? string.Format(CultureInfo.InvariantCulture, "{0} ({1} values)", Name, _values.Length) : Name;
 
+    /// <summary>Raw weight of standard <paramref name="index"/> (any scheme), or NaN where the scheme is undefined
+    /// (the caller checks finite and &gt; 0; <see cref="PointWeight"/> gives the message).</summary>
+    internal double PointWeightOrNaN(int index, double x, double y) => Scheme switch
+    {
+        WeightingScheme.None => 1.0,
+        WeightingScheme.InverseX => x > 0 ? 1.0 / x : double.NaN,
+        WeightingScheme.InverseXSquared => x != 0 ? 1.0 / (x * x) : double.NaN,
+        WeightingScheme.InverseY => y > 0 ? 1.0 / y : double.NaN,
+        WeightingScheme.InverseYSquared => y > 0 ? 1.0 / (y * y) : double.NaN,
+        WeightingScheme.InverseVariance => 1.0 / (_values[index] * _values[index]),
+        _ => _values[index],
+    };
+
+    /// <summary>Raw weight of standard <paramref name="index"/> (any scheme), checked finite and &gt; 0.</summary>
+    /// <exception cref="ArgumentException">The weight is undefined, not finite or not &gt; 0 (names parameter x).</exception>
+    internal double PointWeight(int index, double x, double y)
+    {
+        double w = Scheme switch
+        {
+            WeightingScheme.None => 1.0,
+            WeightingScheme.InverseVariance => 1.0 / (_values[index] * _values[index]),
+            WeightingScheme.Custom => _values[index],
+            _ => RawWeight(x, y, index),
+        };
+        if (!(w > 0) || double.IsInfinity(w))
+        {
+            throw new ArgumentException(
+                FormattableString.Invariant(
+                    $"Weighting '{Name}' gives weight {Guard.Format(w)} at point {index}; weights must be finite and > 0 (the per-point value is too small or too large)."),
+                nameof(x));
+        }
+
+        return w;
+    }
+
     /// <summary>
     /// Raw weight of one point for the x/y-based schemes (None, 1/x, 1/x², 1/y, 1/y²).
     /// <paramref name="index"/> &lt; 0 means "the unknown", for messages.
     /// </summary>
     internal double RawWeight(double x, double y, int index)
     {
-        string where = index >= 0 ? FormattableString.Invariant($"point {index}") : "the unknown";
         switch (Scheme)
         {
             case WeightingScheme.None:
@@ -189,28 +211,28 @@ public sealed class Weighting : IEquatable<Weighting>
             case WeightingScheme.InverseX:
                 if (!(x > 0))
                 {
-                    throw Undefined(where, "x", x, "1/x needs x > 0", nameof(x));
+                    throw Undefined(index, "x", x, "1/x needs x > 0", nameof(x));
                 }
 
                 return 1.0 / x;
             case WeightingScheme.InverseXSquared:
                 if (x == 0)
                 {
-                    throw Undefined(where, "x", x, "1/x² needs x ≠ 0", nameof(x));
+                    throw Undefined(index, "x", x, "1/x² needs x ≠ 0", nameof(x));
                 }
 
                 return 1.0 / (x * x);
             case WeightingScheme.InverseY:
                 if (!(y > 0))
                 {
-                    throw Undefined(where, "y", y, "1/y needs y > 0", nameof(y));
+                    throw Undefined(index, "y", y, "1/y needs y > 0", nameof(y));
                 }
 
                 return 1.0 / y;
             case WeightingScheme.InverseYSquared:
                 if (!(y > 0))
                 {
-                    throw Undefined(where, "y", y, "1/y² needs y > 0", nameof(y));
+                    throw Undefined(index, "y", y, "1/y² needs y > 0", nameof(y));
                 }
 
                 return 1.0 / (y * y);
@@ -219,10 +241,10 @@ public sealed class Weighting : IEquatable<Weighting>
         }
     }
 
-    private ArgumentException Undefined(string where, string variable, double value, string why, string paramName) =>
+    private ArgumentException Undefined(int index, string variable, double value, string why, string paramName) =>
         new(
             FormattableString.Invariant(
-                $"Weighting '{Name}' is undefined at {where}: {variable} = {Guard.Format(value)} ({why}). Exclude or offset that point, or choose another weighting."),
+                $"Weighting '{Name}' is undefined at {(index >= 0 ? FormattableString.Invariant($"point {index}") : "the unknown")}: {variable} = {Guard.Format(value)} ({why}). Exclude or offset that point, or choose another weighting."),
             paramName);
 
     private static double[] CopyPositive(IReadOnlyList<double> values, string paramName)

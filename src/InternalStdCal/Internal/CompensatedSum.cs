@@ -1,3 +1,5 @@
+using System;
+
 namespace InternalStdCal.Internal;
 
 /// <summary>
@@ -27,26 +29,45 @@ internal struct CompensatedSum
     internal void AddProduct(double a, double b)
     {
         double p = a * b;
-        (double ah, double al) = Split(a);
-        (double bh, double bl) = Split(b);
         Add(p);
-        _lo += (((ah * bh) - p) + (ah * bl) + (al * bh)) + (al * bl);
+        _lo += ProductError(a, b, p);
     }
 
     /// <summary>Adds c·x² with x² taken exactly.</summary>
     internal void AddProductOfSquare(double c, double x)
     {
         double h = x * x;
-        (double xh, double xl) = Split(x);
-        double l = (((xh * xh) - h) + (2 * xh * xl)) + (xl * xl);
+        double l = ProductError(x, x, h);
         AddProduct(c, h);
         _lo += c * l;
     }
 
+    /// <summary>The exact rounding error a·b − p of p = fl(a·b) (TwoProduct: fused multiply-add where the
+    /// target has it, else Dekker's split; both exact barring overflow or underflow).</summary>
+    internal static double ProductError(double a, double b, double p)
+    {
+#if NET
+        return Math.FusedMultiplyAdd(a, b, -p);
+#else
+        (double ah, double al) = Split(a);
+        (double bh, double bl) = Split(b);
+        return (((ah * bh) - p) + (ah * bl) + (al * bh)) + (al * bl);
+#endif
+    }
+
+    /// <summary>The exact rounding error (a + b) − s of s = fl(a + b) (Knuth's TwoSum).</summary>
+    internal static double SumError(double a, double b, double s)
+    {
+        double bb = s - a;
+        return (a - (s - bb)) + (b - bb);
+    }
+
+#if !NET
     private static (double High, double Low) Split(double a)
     {
         double c = Splitter * a;
         double high = c - (c - a);
         return (high, a - high);
     }
+#endif
 }

@@ -27,14 +27,26 @@ internal static class FQuantile
             guess = t * t;
         }
 
-        return TailInversion.Solve(
-            f => UpperTail(f, numeratorDf, denominatorDf),
-            f => MathNet.Numerics.Distributions.FisherSnedecor.PDF(numeratorDf, denominatorDf, f),
-            1 - p,
-            guess);
+        return TailInversion.Solve(new Distribution(numeratorDf, denominatorDf), 1 - p, guess);
     }
 
     /// <summary>Upper-tail probability P(F &gt; f) for f ≥ 0.</summary>
     internal static double UpperTail(double f, int numeratorDf, int denominatorDf) =>
         SpecialFunctions.BetaRegularized(denominatorDf / 2.0, numeratorDf / 2.0, denominatorDf / (denominatorDf + (numeratorDf * f)));
+
+    private readonly struct Distribution : ITailDistribution
+    {
+        private readonly int _numeratorDf;
+        private readonly int _denominatorDf;
+
+        internal Distribution(int numeratorDf, int denominatorDf)
+        {
+            _numeratorDf = numeratorDf;
+            _denominatorDf = denominatorDf;
+        }
+
+        public double UpperTail(double v) => FQuantile.UpperTail(v, _numeratorDf, _denominatorDf);
+
+        public double Density(double v) => MathNet.Numerics.Distributions.FisherSnedecor.PDF(_numeratorDf, _denominatorDf, v);
+    }
 }

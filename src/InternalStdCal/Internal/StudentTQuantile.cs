@@ -58,10 +58,17 @@ internal static class StudentTQuantile
         double z = MathNet.Numerics.Distributions.Normal.InvCDF(0, 1, 1 - q);
         double guess = z + (((z * z * z) + z) / (4.0 * df));
 
-        return TailInversion.Solve(
-            t => UpperTail(t, df),
-            t => MathNet.Numerics.Distributions.StudentT.PDF(0, 1, df, t),
-            q,
-            guess);
+        return TailInversion.Solve(new Distribution(df), q, guess);
+    }
+
+    private readonly struct Distribution : ITailDistribution
+    {
+        private readonly int _df;
+
+        internal Distribution(int df) => _df = df;
+
+        public double UpperTail(double v) => StudentTQuantile.UpperTail(v, _df);
+
+        public double Density(double v) => MathNet.Numerics.Distributions.StudentT.PDF(0, 1, _df, v);
     }
 }

@@ -4,21 +4,22 @@ namespace InternalStdCal.Internal;
 
 /// <summary>
 /// Solves tail(q) = target for a strictly decreasing upper-tail probability on (0, ∞), using Newton steps
-/// on the density inside a bisection bracket. Shared by the Student t and F quantiles.
+/// on the density inside a bisection bracket. Shared by the Student t and F quantiles. The distribution is
+/// passed as a struct so that a call allocates nothing (no delegates or closures).
 /// </summary>
 internal static class TailInversion
 {
-    /// <param name="upperTail">P(X &gt; v), strictly decreasing in v on (0, ∞).</param>
-    /// <param name="density">Probability density at v.</param>
+    /// <param name="distribution">Upper tail P(X &gt; v), strictly decreasing in v on (0, ∞), and density.</param>
     /// <param name="target">Upper-tail probability sought, in (0, upperTail(0)).</param>
     /// <param name="guess">Starting value (any finite value &gt; 0; a poor one only costs iterations).</param>
-    internal static double Solve(Func<double, double> upperTail, Func<double, double> density, double target, double guess)
+    internal static double Solve<TDistribution>(TDistribution distribution, double target, double guess)
+        where TDistribution : struct, ITailDistribution
     {
         double v = guess > 0 && !double.IsInfinity(guess) ? guess : 1.0;
 
         // Bracket [lo, hi] with upperTail(lo) >= target >= upperTail(hi).
         double lo = 0, hi = v;
-        while (upperTail(hi) > target)
+        while (distribution.UpperTail(hi) > target)
         {
             lo = hi;
             hi *= 2;
@@ -31,7 +32,7 @@ internal static class TailInversion
         v = Math.Min(Math.Max(v, lo), hi);
         for (int iteration = 0; iteration < 200; iteration++)
         {
-            double f = upperTail(v) - target;
+            double f = distribution.UpperTail(v) - target;
             if (f == 0)
             {
                 return v;
@@ -46,7 +47,7 @@ internal static class TailInversion
                 hi = v;
             }
 
-            double d = density(v);
+            double d = distribution.Density(v);
             double next = d > 0 ? v + (f / d) : double.NaN;
             if (!(next > lo && next < hi))
             {
@@ -63,4 +64,14 @@ internal static class TailInversion
 
         return v;
     }
+}
+
+/// <summary>A continuous distribution on (0, ∞) as seen by <see cref="TailInversion"/>.</summary>
+internal interface ITailDistribution
+{
+    /// <summary>P(X &gt; v).</summary>
+    double UpperTail(double v);
+
+    /// <summary>Probability density at v.</summary>
+    double Density(double v);
 }

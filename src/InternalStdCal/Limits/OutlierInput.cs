@@ -57,7 +57,7 @@ internal static class OutlierInput
             : throw new ArgumentOutOfRangeException(paramName, side, $"Parameter '{paramName}' was {side}; it must be TwoSided, High or Low.");
 
     /// <summary>
-    /// The values divided by the power of two 2^k ≥ max|xᵢ| (exact except in the subnormal range), so that sums,
+    /// The values divided by the power of two 2^k ≥ max|xᵢ| (at most 2^1023) (exact except in the subnormal range), so that sums,
     /// differences and squares of the scaled values neither overflow nor underflow. The tests' statistics are
     /// scale-free, so they are computed on these.
     /// </summary>
@@ -69,10 +69,12 @@ internal static class OutlierInput
             maxAbs = Math.Max(maxAbs, Math.Abs(values[i]));
         }
 
+        // Largest power of two below double.MaxValue is 2^1023; then |scaled| < 2.
+        const double MaxScale = 8.98846567431158E+307;
         double scale = 1;
         if (maxAbs > 0)
         {
-            while (scale < maxAbs)
+            while (scale < maxAbs && scale < MaxScale)
             {
                 scale *= 2;
             }

@@ -15,10 +15,12 @@ public enum ResultQualifiers
     /// <summary>An injection used has an internal-standard recovery outside the method's window.</summary>
     InternalStandardRecoveryOutOfWindow = 2,
 
-    /// <summary>Below the limit of quantitation (and not below the LOD); the value is kept.</summary>
+    /// <summary>The original-sample result is below the limit of quantitation (and not below the LOD), see
+    /// <see cref="AnalyteResult.Reported"/>; the value is kept.</summary>
     BelowLimitOfQuantitation = 4,
 
-    /// <summary>Below the limit of detection; the value is kept.</summary>
+    /// <summary>The original-sample result is below the limit of detection (not detected), see
+    /// <see cref="AnalyteResult.Reported"/>; the value is kept.</summary>
     BelowLimitOfDetection = 8,
 
     /// <summary>A quality-control check bracketing an injection of the result failed.</summary>

@@ -141,13 +141,20 @@ public static class RunProcessor
 
     private static DriftCheck Trend(DriftSeriesKind kind, string name, int[] orders, double[] values, DriftRule rule)
     {
+        if (values.Length < 3)
+        {
+            return new DriftCheck(kind, name, orders, null, Text.I(values.Length) + " point(s); a trend with a slope interval needs at least 3.");
+        }
+
         try
         {
             return new DriftCheck(kind, name, orders, DriftTrend.Fit(orders.Select(o => (double)o).ToArray(), values, rule), null);
         }
         catch (ArgumentException e)
         {
-            return new DriftCheck(kind, name, orders, null, e.Message);
+            string message = e.Message;
+            string suffix = " (Parameter '" + e.ParamName + "')";
+            return new DriftCheck(kind, name, orders, null, message.EndsWith(suffix, StringComparison.Ordinal) ? message.Substring(0, message.Length - suffix.Length) : message);
         }
     }
 

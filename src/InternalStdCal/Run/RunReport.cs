@@ -9,7 +9,9 @@ namespace InternalStdCal.Run;
 
 /// <summary>
 /// The outcome of <see cref="RunProcessor.Process"/>: per analyte the calibration and its verdict, per sample and
-/// analyte the result with flags, the quality-control checks, and a status row for every input injection.
+/// analyte the result with flags and its reported value, the quality-control checks, the drift trends, and a status
+/// row for every input injection. The uncertainty budget of a result is one call away
+/// (<see cref="AnalyteResult.UncertaintyBudget"/>).
 /// </summary>
 /// <remarks>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
 /// decide what is reported. Immutable.</remarks>

@@ -19,7 +19,7 @@ public class RunResultsJsonTests
             "demo",
             new[]
             {
-                new AnalyteMethod("Cd-111", "Rh-103", RatioModel.Linear, limits: new ReportingLimits(InternalStdCal.Quantities.Concentration.FromMicrogramsPerLitre(0.05), InternalStdCal.Quantities.Concentration.FromMicrogramsPerLitre(0.15))),
+                new AnalyteMethod("Cd-111", "Rh-103", RatioModel.Linear, limits: new InternalStdCal.Limits.ReportingLimits(InternalStdCal.Quantities.Concentration.FromMicrogramsPerLitre(0.05), InternalStdCal.Quantities.Concentration.FromMicrogramsPerLitre(0.15))),
                 new AnalyteMethod("Cu-63", "Rh-103", RatioModel.Linear),
                 new AnalyteMethod("Pb-208", "Bi-209", RatioModel.Linear),
             },

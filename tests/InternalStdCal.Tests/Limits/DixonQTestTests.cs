@@ -140,14 +140,15 @@ public class DixonQTestTests
         Assert.True(r.IsOutlier);
     }
 
-    // The range max − min of ±1.5e308 overflows a double; Q is still defined: (1.5e308 − 1e307)/3e308.
+    // The range max − min of ±1.5e308 overflows a double; Q is still defined: low end (0 + 1.5e308)/3e308 = 0.5
+    // beats high end (1.5e308 − 1e307)/3e308.
     [Fact]
     public void Evaluate_RangeBeyondDouble_StillDefined()
     {
         OutlierTestResult r = DixonQTest.Evaluate([-1.5e308, 0, 1e307, 1.5e308], 0.05);
 
-        Assert.Equal((1.5 - 0.1) / 3, r.Statistic, 1e-14);
-        Assert.Equal(OutlierSide.High, r.SuspectEnd);
+        Assert.Equal(0.5, r.Statistic, 1e-14);
+        Assert.Equal(OutlierSide.Low, r.SuspectEnd);
     }
 
     [Fact]
