@@ -2,7 +2,6 @@ using System.IO;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.IO;
-using InternalStdCal.Limits;
 using InternalStdCal.Run;
 using Xunit;
 
