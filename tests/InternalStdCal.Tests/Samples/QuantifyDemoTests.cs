@@ -1,0 +1,57 @@
+using System;
+using System.IO;
+using System.Linq;
+using InternalStdCal.IO;
+using InternalStdCal.Run;
+using InternalStdCal.Samples;
+using InternalStdCal.Tests.IO;
+using Xunit;
+
+namespace InternalStdCal.Tests.Samples;
+
+// Invented demo data (samples/data/river-water-run.csv): the check is that the README's demo runs end to end,
+// writes its files and leaves no sample of the run file out of its output.
+public class QuantifyDemoTests
+{
+    [Fact]
+    public void Run_DemoRunFile_WritesJsonAndCsvAndPrintsEverySample()
+    {
+        string folder = Path.Combine(Path.GetTempPath(), "quantify-demo-test-" + Guid.NewGuid().ToString("N"));
+        var output = new StringWriter();
+        try
+        {
+            int exitCode = QuantifyDemo.Run(new[] { folder }, output);
+
+            string text = output.ToString();
+            Assert.True(exitCode == 0, text);
+            Assert.True(File.Exists(Path.Combine(folder, "river-water-run-results.json")), text);
+            Assert.True(File.Exists(Path.Combine(folder, "river-water-run-results.csv")), text);
+            string[] sampleIds = RunCsv.ReadFile(RunCsvTests.DemoFile).Run!.Injections
+                .Where(i => i.Role is not (InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank or InjectionRole.QualityControl))
+                .Select(i => i.Id)
+                .ToArray();
+            Assert.Equal(8, sampleIds.Length); // MB-01, RW-01..05, RW-02D, RW-02S
+            Assert.All(sampleIds, id => Assert.Contains(id, text, StringComparison.Ordinal));
+        }
+        finally
+        {
+            if (Directory.Exists(folder))
+            {
+                Directory.Delete(folder, recursive: true);
+            }
+        }
+    }
+
+    [Fact]
+    public void Run_MissingRunFile_ExitCodeOneAndMessage()
+    {
+        string folder = Path.Combine(Path.GetTempPath(), "quantify-demo-test-" + Guid.NewGuid().ToString("N"));
+        var output = new StringWriter();
+
+        int exitCode = QuantifyDemo.Run(new[] { folder, Path.Combine(folder, "no-such-run.csv") }, output);
+
+        Assert.Equal(1, exitCode);
+        Assert.Contains("Run file not found", output.ToString(), StringComparison.Ordinal);
+        Assert.False(Directory.Exists(folder));
+    }
+}
