@@ -225,6 +225,7 @@ public static class RunProcessor
         private readonly RunMethod _method;
         private readonly Dictionary<int, RowState> _rows = new();
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
+        private readonly List<RunInjection[]> _samples;
 
         internal State(AnalyticalRun run, RunMethod method)
         {
@@ -234,6 +235,9 @@ public static class RunProcessor
             {
                 _rows[r.Order] = new RowState(r);
             }
+
+            // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
+            _samples = run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
         }
 
         internal IReadOnlyDictionary<string, double?> References => _references;
@@ -261,9 +265,26 @@ public static class RunProcessor
 
         internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
+            // Results by analyte, then by id (insertion order kept), in one pass instead of one filter per analyte.
+            var byAnalyte = new Dictionary<string, Dictionary<string, ResultBuilder>>(StringComparer.Ordinal);
+            foreach (ResultBuilder r in results)
+            {
+                if (!byAnalyte.TryGetValue(r.Analyte, out Dictionary<string, ResultBuilder>? ids))
+                {
+                    ids = new Dictionary<string, ResultBuilder>(StringComparer.Ordinal);
+                    byAnalyte.Add(r.Analyte, ids);
+                }
+
+                ids.Add(r.Id, r);
+            }
+
             foreach (AnalyteMethod a in method.Analytes)
             {
-                var byId = results.Where(r => r.Analyte == a.Analyte).ToDictionary(r => r.Id, StringComparer.Ordinal);
+                if (!byAnalyte.TryGetValue(a.Analyte, out Dictionary<string, ResultBuilder>? byId))
+                {
+                    continue;
+                }
+
                 foreach (ResultBuilder d in byId.Values.Where(r => r.Role == InjectionRole.SampleDuplicate))
                 {
                     ResultBuilder parent = byId[d.Rows[0].ParentId!];
@@ -417,10 +438,10 @@ public static class RunProcessor
 
         internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
         {
-            var list = new List<ResultBuilder>();
-            foreach (IGrouping<string, RunInjection> g in _run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal))
+            var list = new List<ResultBuilder>(_samples.Count);
+            foreach (RunInjection[] g in _samples)
             {
-                var b = new ResultBuilder(g.Key, g.First().Role, a.Analyte, g.ToList());
+                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g);
                 Quantify(a, cal, b, InjectionStatus.Quantified);
                 if (b.Quantitation is QuantitationResult q)
                 {
@@ -565,6 +586,19 @@ public static class RunProcessor
             }
 
             return new SpikeCheck(analyte, spiked.Id, parent.Id, s, u, added, recovery, window, passed, notes);
+        }
+
+        private static InternalStandardRecovery? RecoveryOf(RowState st, string internalStandard)
+        {
+            foreach (InternalStandardRecovery x in st.Recoveries)
+            {
+                if (x.InternalStandard == internalStandard)
+                {
+                    return x;
+                }
+            }
+
+            return null;
         }
 
         private static string OrderText(int order) =>
@@ -777,13 +811,14 @@ public static class RunProcessor
             Outlier(a, b, injections, used);
             foreach (RunInjection r in used)
             {
-                _rows[r.Order].Set(a.Analyte, success, NonPositive(r, a));
+                RowState st = _rows[r.Order];
+                st.Set(a.Analyte, success, NonPositive(r, a));
                 if (r.Signals.Analyte(a.Analyte) <= 0)
                 {
                     b.Qualifiers |= ResultQualifiers.NonPositiveAnalyteSignal;
                 }
 
-                if (_rows[r.Order].Recoveries.FirstOrDefault(x => x.InternalStandard == a.InternalStandard) is { WithinWindow: false } rec)
+                if (RecoveryOf(st, a.InternalStandard) is { WithinWindow: false } rec)
                 {
                     b.Qualifiers |= ResultQualifiers.InternalStandardRecoveryOutOfWindow;
                     b.Notes.Add("Injection " + Text.I(r.Order) + ": IS " + a.InternalStandard + " recovery " + Text.F(rec.RecoveryPercent!.Value, 1) + " % outside " + _method.RecoveryWindow + ".");
