@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using InternalStdCal.Calibration;
+using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
