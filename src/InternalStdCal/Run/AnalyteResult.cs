@@ -123,6 +123,8 @@ public sealed class AnalyteResult
     /// <param name="addReplicateRepeatability">Adds the spread of the sample's injections as a separate factor (see
     /// <see cref="ResultUncertaintyBudget.Create"/> for when this is appropriate).</param>
     /// <param name="coverageProbability">p of the GUM evaluation, in (0, 1); default 0.95.</param>
+    /// <param name="correlations">Optional correlations between budget inputs by name (same pipette or stock used
+    /// twice); see <see cref="ResultUncertaintyBudget.Create"/>.</param>
     /// <returns>The budget, in the unit of <see cref="InSample"/>.</returns>
     /// <exception cref="InvalidOperationException">The result has no quantitation (missing or invalid signals, no
     /// calibration, response not readable off the calibration) or no result in the original sample (the preparation did
@@ -135,7 +137,8 @@ public sealed class AnalyteResult
         IReadOnlyList<UncertainInput>? factors = null,
         IReadOnlyList<double>? factorExponents = null,
         bool addReplicateRepeatability = false,
-        double coverageProbability = 0.95)
+        double coverageProbability = 0.95,
+        IReadOnlyList<InputCorrelation>? correlations = null)
     {
         if (Quantitation is not QuantitationResult q)
         {
@@ -151,6 +154,6 @@ public sealed class AnalyteResult
                 + string.Join(" ", Notes.Where(n => n.StartsWith("No result in the original sample", StringComparison.Ordinal))));
         }
 
-        return ResultUncertaintyBudget.Create(q, prep, null, factors, factorExponents, addReplicateRepeatability, coverageProbability);
+        return ResultUncertaintyBudget.Create(q, prep, null, factors, factorExponents, addReplicateRepeatability, coverageProbability, correlations);
     }
 }

@@ -75,10 +75,15 @@ public sealed class ResultUncertaintyBudget
     /// sample's injections. The standard error of an inverse prediction already contains a 1/m repeatability term, so
     /// add it only when that term does not represent the sample's own scatter (e.g. a single-point response factor).</param>
     /// <param name="coverageProbability">p for the GUM evaluation, in (0, 1); default 0.95.</param>
+    /// <param name="correlations">Optional correlations between the budget's inputs by name, e.g. r = 1 between the
+    /// aliquot volumes of two dilution steps made with the same pipette, or between two standards from one stock
+    /// (JCGM 100:2008 §5.2). Input names are those the budget generates (see <see cref="Model"/>): "x0 (calibration)",
+    /// "Dilution i: …: aliquot volume" and so on, plus the names of <paramref name="factors"/>.</param>
     /// <returns>The budget.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="quantitation"/> is null, or an item of <paramref name="factors"/> is null.</exception>
     /// <exception cref="ArgumentException">The preparation does not accept the calibration's kind of concentration;
-    /// <paramref name="factorExponents"/> has another length than <paramref name="factors"/>; duplicate names; a factor
+    /// <paramref name="factorExponents"/> has another length than <paramref name="factors"/>; duplicate names; a correlation
+    /// naming an unknown input or giving a correlation matrix that is not positive semi-definite; a factor
     /// with a bad value for its exponent; or the replicate term was asked for but x₀ is 0 or fewer than two injections
     /// were read.</exception>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageProbability"/> or an exponent is out of range.</exception>
@@ -89,7 +94,8 @@ public sealed class ResultUncertaintyBudget
         IReadOnlyList<UncertainInput>? factors = null,
         IReadOnlyList<double>? factorExponents = null,
         bool addReplicateRepeatability = false,
-        double coverageProbability = 0.95)
+        double coverageProbability = 0.95,
+        IReadOnlyList<InputCorrelation>? correlations = null)
     {
         Guard.NotNull(quantitation, nameof(quantitation));
         Guard.InOpenRange(coverageProbability, 0, 1, nameof(coverageProbability));
@@ -164,7 +170,7 @@ public sealed class ResultUncertaintyBudget
             }
         }
 
-        MeasurementModel model = MeasurementModel.Product("result", Concentration.SymbolOf(unit), k, inputs, exponents);
+        MeasurementModel model = MeasurementModel.Product("result", Concentration.SymbolOf(unit), k, inputs, exponents, correlations);
         return new ResultUncertaintyBudget(model, unit, model.EvaluateGum(coverageProbability));
     }
 

@@ -95,6 +95,27 @@ public class ResultUncertaintyBudgetTests
     }
 
     [Fact]
+    public void Create_SamePipetteInTwoSteps_CorrelationAddsTheCrossTerm()
+    {
+        // Two 1 → 100 steps with one pipette: with r = 1 between the two aliquot volumes their relative terms add
+        // linearly, (u/y)² = (s_x0/x₀)² + (2·u_p)² + 2·u_f² with u_p = 0.008/√3, u_f = 0.001/√3
+        // (JCGM 100:2008 §5.2.2, correlated inputs; COMPUTED here).
+        QuantitationResult q = Quantified();
+        SampleResult template = SampleResult.Liquid(q.AsMeasured()!.Value, new DilutionStep[] { OneInHundred(), OneInHundred() });
+        ResultUncertaintyBudget independent = ResultUncertaintyBudget.Create(q, template);
+        string[] aliquots = independent.Model.Inputs.Select(i => i.Name).Where(n => n.EndsWith("aliquot volume", StringComparison.Ordinal)).ToArray();
+        Assert.Equal(2, aliquots.Length);
+
+        ResultUncertaintyBudget shared = ResultUncertaintyBudget.Create(q, template, correlations: new[] { new InputCorrelation(aliquots[0], aliquots[1], 1) });
+        double up = 0.008 / Math.Sqrt(3), uf = 0.001 / Math.Sqrt(3);
+        double relShared = Math.Sqrt(Math.Pow(Sx0 / X0, 2) + Math.Pow(2 * up, 2) + (2 * uf * uf));
+        double relIndependent = Math.Sqrt(Math.Pow(Sx0 / X0, 2) + (2 * up * up) + (2 * uf * uf));
+        Assert.Equal(relShared, shared.Gum.RelativeStandardUncertainty, 6);
+        Assert.Equal(relIndependent, independent.Gum.RelativeStandardUncertainty, 6);
+        Assert.Throws<ArgumentException>(() => ResultUncertaintyBudget.Create(q, template, correlations: new[] { new InputCorrelation("no such input", aliquots[1], 0.5) }));
+    }
+
+    [Fact]
     public void Create_ReplicateRepeatability_AddsTypeAFactor()
     {
         QuantitationResult q = Quantified(m: 2);
