@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
+using InternalStdCal.Limits;
 using InternalStdCal.Quantities;
 using InternalStdCal.Run;
 
@@ -55,6 +56,12 @@ public sealed record RunResults
     /// <summary>One status row per input injection, in injection order.</summary>
     public IReadOnlyList<InjectionResult> Injections { get; init; } = Array.Empty<InjectionResult>();
 
+    /// <summary>Drift checks across injection order (empty when the method sets no drift rule).</summary>
+    public IReadOnlyList<DriftResult> Drift { get; init; } = Array.Empty<DriftResult>();
+
+    /// <summary>Run-level notes of the report (e.g. drift flagged, calibration problems), in the report's order.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = Array.Empty<string>();
+
     /// <summary>Copies a report into plain data.</summary>
     /// <param name="report">The report of <see cref="RunProcessor.Process"/>.</param>
     /// <returns>The results.</returns>
@@ -93,6 +100,9 @@ public sealed record RunResults
                 InSampleStandardUncertainty = r.InSample?.StandardUncertainty,
                 SampleLower = r.SampleLower,
                 SampleUpper = r.SampleUpper,
+                ReportedStatus = r.Reported?.Status,
+                ReportingLimit = r.Reported?.Limit,
+                ReportedText = r.Reported?.ToString(),
                 Qualifiers = r.Qualifiers,
                 Notes = r.Notes.ToArray(),
             }).ToArray(),
@@ -150,6 +160,8 @@ public sealed record RunResults
                 }).ToArray(),
                 Reasons = o.Reasons.ToArray(),
             }).ToArray(),
+            Drift = report.Drift.Select(DriftResult.From).ToArray(),
+            Notes = report.Notes.ToArray(),
         };
     }
 
@@ -160,7 +172,8 @@ public sealed record RunResults
         && Same.Map(InternalStandardReferences, other.InternalStandardReferences)
         && Same.List(Calibrations, other.Calibrations) && Same.List(Results, other.Results)
         && Same.List(QualityControl, other.QualityControl) && Same.List(Duplicates, other.Duplicates)
-        && Same.List(Spikes, other.Spikes) && Same.List(Injections, other.Injections);
+        && Same.List(Spikes, other.Spikes) && Same.List(Injections, other.Injections)
+        && Same.List(Drift, other.Drift) && Same.List(Notes, other.Notes);
 
     /// <inheritdoc />
     public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(RunName) ^ (Results?.Count ?? 0);
@@ -239,6 +252,20 @@ public sealed record SampleAnalyteResult
     /// <summary>Upper confidence limit in the original sample; null without an interval.</summary>
     public Concentration? SampleUpper { get; init; }
 
+    /// <summary>How the result is reported against the analyte's reporting limits (not detected, below the
+    /// quantification limit, quantified); null when the result has no reported value (not quantified, or not carried
+    /// to the original sample).</summary>
+    public ReportedStatus? ReportedStatus { get; init; }
+
+    /// <summary>The limit a censored result is reported against (the LOD for not detected, the LOQ for below the
+    /// quantification limit), in the original sample and in its own unit; null for a quantified result or without a
+    /// reported value.</summary>
+    public Concentration? ReportingLimit { get; init; }
+
+    /// <summary>The reported value as text, e.g. <c>&lt; 0.15 µg/L (LOQ)</c> or <c>0.613 µg/L</c>
+    /// (<see cref="ReportedValue.ToString()"/>); null without a reported value.</summary>
+    public string? ReportedText { get; init; }
+
     /// <summary>Qualifier flags.</summary>
     public ResultQualifiers Qualifiers { get; init; }
 
@@ -252,6 +279,7 @@ public sealed record SampleAnalyteResult
         && Same.Exact(MeasuredLower, other.MeasuredLower) && Same.Exact(MeasuredUpper, other.MeasuredUpper)
         && Same.Exact(InSample, other.InSample) && Same.Exact(InSampleStandardUncertainty, other.InSampleStandardUncertainty)
         && Same.Exact(SampleLower, other.SampleLower) && Same.Exact(SampleUpper, other.SampleUpper)
+        && ReportedStatus == other.ReportedStatus && Same.Exact(ReportingLimit, other.ReportingLimit) && ReportedText == other.ReportedText
         && Qualifiers == other.Qualifiers && Same.List(Notes, other.Notes);
 
     /// <inheritdoc />
@@ -433,6 +461,101 @@ public sealed record InternalStandardRecoveryResult
 
     /// <summary>Whether the recovery is in the window; null without a recovery.</summary>
     public bool? WithinWindow { get; init; }
+}
+
+/// <summary>
+/// A drift check across injection order in <see cref="RunResults"/>: the straight-line trend of one series (IS signal
+/// or QC recovery %) against injection order (<see cref="DriftTrend"/>). Trend members are null when no trend was
+/// fitted (see <see cref="Failure"/>).
+/// </summary>
+/// <remarks>The library computes; the lab's validated method, its QA system, local regulations and licensed practice
+/// decide what a flagged drift means for the run.</remarks>
+public sealed record DriftResult
+{
+    /// <summary>Which kind of series was checked.</summary>
+    public DriftSeriesKind Kind { get; init; }
+
+    /// <summary>IS name (IS signal) or analyte name (QC recovery).</summary>
+    public string Name { get; init; } = string.Empty;
+
+    /// <summary>Injection orders of the points in the series.</summary>
+    public IReadOnlyList<int> InjectionOrders { get; init; } = Array.Empty<int>();
+
+    /// <summary>The drift rule applied, as printed; null when no trend was fitted.</summary>
+    public string? Rule { get; init; }
+
+    /// <summary>Number of points in the trend; null when no trend was fitted.</summary>
+    public int? Count { get; init; }
+
+    /// <summary>Mean of the series (signal, or recovery in %); null when no trend was fitted.</summary>
+    public double? Mean { get; init; }
+
+    /// <summary>Least-squares slope per injection-order step, in the unit of the series; null when no trend was fitted.</summary>
+    public double? Slope { get; init; }
+
+    /// <summary>Standard error of <see cref="Slope"/>; null when no trend was fitted.</summary>
+    public double? SlopeStandardError { get; init; }
+
+    /// <summary>Lower confidence limit of the slope (level of the rule); null when no trend was fitted.</summary>
+    public double? SlopeLower { get; init; }
+
+    /// <summary>Upper confidence limit of the slope (level of the rule); null when no trend was fitted.</summary>
+    public double? SlopeUpper { get; init; }
+
+    /// <summary>Drift over the run span, in % of the mean; null when no trend was fitted.</summary>
+    public double? DriftOverRunPercent { get; init; }
+
+    /// <summary>Lower confidence limit of <see cref="DriftOverRunPercent"/>; null when no trend was fitted.</summary>
+    public double? DriftOverRunPercentLower { get; init; }
+
+    /// <summary>Upper confidence limit of <see cref="DriftOverRunPercent"/>; null when no trend was fitted.</summary>
+    public double? DriftOverRunPercentUpper { get; init; }
+
+    /// <summary>Whether the slope interval excludes 0; null when no trend was fitted.</summary>
+    public bool? SlopeSignificant { get; init; }
+
+    /// <summary>Why no trend was fitted; null when one was.</summary>
+    public string? Failure { get; init; }
+
+    /// <summary>True when the rule flags the trend as drift.</summary>
+    public bool Flagged { get; init; }
+
+    /// <inheritdoc />
+    public bool Equals(DriftResult? other) =>
+        other is not null && Kind == other.Kind && Name == other.Name && Same.List(InjectionOrders, other.InjectionOrders)
+        && Rule == other.Rule && Count == other.Count && Nullable.Equals(Mean, other.Mean) && Nullable.Equals(Slope, other.Slope)
+        && Nullable.Equals(SlopeStandardError, other.SlopeStandardError) && Nullable.Equals(SlopeLower, other.SlopeLower)
+        && Nullable.Equals(SlopeUpper, other.SlopeUpper) && Nullable.Equals(DriftOverRunPercent, other.DriftOverRunPercent)
+        && Nullable.Equals(DriftOverRunPercentLower, other.DriftOverRunPercentLower)
+        && Nullable.Equals(DriftOverRunPercentUpper, other.DriftOverRunPercentUpper)
+        && SlopeSignificant == other.SlopeSignificant && Failure == other.Failure && Flagged == other.Flagged;
+
+    /// <inheritdoc />
+    public override int GetHashCode() => ((int)Kind * 397) ^ StringComparer.Ordinal.GetHashCode(Name);
+
+    internal static DriftResult From(DriftCheck check)
+    {
+        DriftTrend? t = check.Trend;
+        return new DriftResult
+        {
+            Kind = check.Kind,
+            Name = check.Name,
+            InjectionOrders = check.InjectionOrders.ToArray(),
+            Rule = t?.Rule.ToString(),
+            Count = t?.Count,
+            Mean = t?.Mean,
+            Slope = t?.Slope,
+            SlopeStandardError = t?.SlopeStandardError,
+            SlopeLower = t?.SlopeInterval.Lower,
+            SlopeUpper = t?.SlopeInterval.Upper,
+            DriftOverRunPercent = t?.DriftOverRunPercent,
+            DriftOverRunPercentLower = t?.DriftOverRunPercentInterval.Lower,
+            DriftOverRunPercentUpper = t?.DriftOverRunPercentInterval.Upper,
+            SlopeSignificant = t?.IsSlopeSignificant,
+            Failure = check.Failure,
+            Flagged = check.IsFlagged,
+        };
+    }
 }
 
 /// <summary>Element-wise equality for the result records.</summary>

@@ -23,12 +23,16 @@ public static class RunResultsCsv
         "measured", "measured-low", "measured-high", "measured-unit",
         "in-sample", "in-sample-u", "sample-low", "sample-high", "sample-unit",
         "flags", "qualifiers", "notes",
+        "reported", "reported-status", "reporting-limit", "reporting-limit-unit",
     };
 
     /// <summary>Writes one row per sample × analyte. Measured values are given in the unit of the measured result,
     /// sample values in the unit of the sample result; "flags" is the readable text of
     /// <see cref="RunReport.QualifierText"/>, "qualifiers" the flag names, "notes" the trail joined by " | ";
-    /// "injections" the injection orders separated by spaces. Empty cell = no value.</summary>
+    /// "injections" the injection orders separated by spaces; "reported" is the reported value as text
+    /// (e.g. <c>&lt; 0.15 µg/L (LOQ)</c>), "reported-status" its <see cref="InternalStdCal.Limits.ReportedStatus"/>
+    /// name, "reporting-limit" the limit of a censored value in its own unit ("reporting-limit-unit").
+    /// Empty cell = no value.</summary>
     /// <param name="results">The results.</param>
     /// <param name="writer">Where to write; not disposed.</param>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
@@ -59,6 +63,10 @@ public static class RunResultsCsv
                 RunReport.QualifierText(r.Qualifiers),
                 r.Qualifiers.ToString(),
                 string.Join(" | ", r.Notes),
+                r.ReportedText,
+                r.ReportedStatus?.ToString(),
+                Number(r.ReportingLimit, r.ReportingLimit?.Unit),
+                r.ReportingLimit is Concentration limit ? RunText.FormatUnit(limit.Unit) : null,
             });
         }
 
