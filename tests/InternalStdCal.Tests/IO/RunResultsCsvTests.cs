@@ -34,9 +34,37 @@ public class RunResultsCsvTests
             Same(r.SampleLower, csv.GetString(10), csv.GetString(12));
             Assert.Equal(r.Qualifiers.ToString(), csv.GetString(14));
             Assert.Equal(string.Join(" | ", r.Notes), csv.GetString(15));
+            Assert.Equal(r.ReportedText ?? string.Empty, csv.GetString(16));
+            Assert.Equal(r.ReportedStatus?.ToString() ?? string.Empty, csv.GetString(17));
+            Same(r.ReportingLimit, csv.GetString(18), csv.GetString(19));
         }
 
         Assert.Equal(results.Results.Count, row);
+    }
+
+    [Fact]
+    public void Write_ReportingLimits_CensoredRowsCarryStatusLimitAndText()
+    {
+        RunResults results = RunResults.From(RunResultsJsonTests.ProcessDemo());
+        var text = new StringWriter();
+
+        RunResultsCsv.Write(results, text);
+        using CsvDataReader csv = CsvDataReader.Create(new StringReader(text.ToString()), new CsvDataReaderOptions { Delimiter = ',' });
+
+        int censored = 0;
+        while (csv.Read())
+        {
+            if (csv.GetString(csv.GetOrdinal("reported-status")) is "NotDetected" or "BelowQuantificationLimit")
+            {
+                censored++;
+                Assert.StartsWith("< ", csv.GetString(csv.GetOrdinal("reported")), System.StringComparison.Ordinal);
+                Assert.NotEqual(string.Empty, csv.GetString(csv.GetOrdinal("reporting-limit")));
+                Assert.Equal("µg/L", csv.GetString(csv.GetOrdinal("reporting-limit-unit")));
+            }
+        }
+
+        Assert.Equal(results.Results.Count(r => r.ReportingLimit is not null), censored);
+        Assert.True(censored > 0);
     }
 
     private static void Same(Concentration? expected, string number, string unit)
