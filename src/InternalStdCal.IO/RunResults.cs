@@ -254,7 +254,7 @@ public sealed record SampleAnalyteResult
 
     /// <summary>How the result is reported against the analyte's reporting limits (not detected, below the
     /// quantification limit, quantified); null when the result has no reported value (not quantified, or not carried
-    /// to the original sample).</summary>
+    /// to the original sample, or reporting limits of another concentration kind than the result).</summary>
     public ReportedStatus? ReportedStatus { get; init; }
 
     /// <summary>The limit a censored result is reported against (the LOD for not detected, the LOQ for below the
