@@ -297,7 +297,7 @@ public sealed class VarianceHomogeneityTest
             r[j] = s.Injections[j].Ratio;
         }
 
-        double sd = ResponseFactorCalibration.StandardDeviation(r, ResponseFactorCalibration.Mean(r));
+        double sd = SampleStatistics.StandardDeviation(r, SampleStatistics.Mean(r));
         return sd * sd;
     }
 }

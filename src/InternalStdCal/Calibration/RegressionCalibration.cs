@@ -150,7 +150,7 @@ public sealed class RegressionCalibration : RatioCalibration
             CalibrationStandard s = set.Standards[p.Standard];
             int n = s.Injections.Count;
             double[] r = s.Injections.Select(i => i.Ratio).ToArray();
-            double sd = n > 1 ? ResponseFactorCalibration.StandardDeviation(r, ResponseFactorCalibration.Mean(r)) : 0;
+            double sd = n > 1 ? SampleStatistics.StandardDeviation(r, SampleStatistics.Mean(r)) : 0;
             if (!(sd > 0))
             {
                 throw new ArgumentException(
@@ -319,7 +319,7 @@ public sealed class RegressionCalibration : RatioCalibration
                 set.Included[i],
                 x,
                 mean,
-                ratios.Length > 1 ? ResponseFactorCalibration.StandardDeviation(ratios, mean) : null,
+                ratios.Length > 1 ? SampleStatistics.StandardDeviation(ratios, mean) : null,
                 fitted,
                 pointIndex.TryGetValue((i, -1), out int kl) ? fit.StandardizedResiduals[kl] : null,
                 levelBack,

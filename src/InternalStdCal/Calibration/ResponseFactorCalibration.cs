@@ -81,13 +81,13 @@ public sealed class ResponseFactorCalibration : RatioCalibration
             rf[k] = p.Y / ToRatioAxis(set, p.Standard);
         }
 
-        double mean = Mean(rf);
+        double mean = SampleStatistics.Mean(rf);
         if (!(mean > 0))
         {
             throw new ArgumentException($"Parameter 'standards': the mean response factor is {Text.G(mean)}; it must be > 0 (the analyte signals of the standards are zero or negative on average).", nameof(standards));
         }
 
-        double? sd = rf.Length > 1 ? StandardDeviation(rf, mean) : null;
+        double? sd = rf.Length > 1 ? SampleStatistics.StandardDeviation(rf, mean) : null;
         RatioModel model = set.IncludedLevelCount == 1 ? RatioModel.SinglePointResponseFactor : RatioModel.AverageResponseFactor;
         if (sd is null)
         {
@@ -209,7 +209,7 @@ public sealed class ResponseFactorCalibration : RatioCalibration
             set.Included[i],
             set.AxisValues[i],
             meanRatio,
-            ratios.Length > 1 ? StandardDeviation(ratios, Mean(ratios)) : null,
+            ratios.Length > 1 ? SampleStatistics.StandardDeviation(ratios, SampleStatistics.Mean(ratios)) : null,
             fitted,
             fitByLevel && zOk ? (levelRf!.Value - meanRf) / sd!.Value : null,
             Concentration.From(levelBack, set.Unit),
@@ -221,28 +221,4 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// <summary>100·(x' − x)/x; null at x = 0.</summary>
     internal static double? RelativeError(double backCalculated, double nominal) =>
         nominal == 0 ? null : 100 * (backCalculated - nominal) / nominal;
-
-    internal static double Mean(IReadOnlyList<double> values)
-    {
-        double sum = 0;
-        foreach (double v in values)
-        {
-            sum += v;
-        }
-
-        return sum / values.Count;
-    }
-
-    // Two-pass (centred) sum of squares.
-    internal static double StandardDeviation(IReadOnlyList<double> values, double mean)
-    {
-        double ss = 0;
-        foreach (double v in values)
-        {
-            double d = v - mean;
-            ss += d * d;
-        }
-
-        return Math.Sqrt(ss / (values.Count - 1));
-    }
 }

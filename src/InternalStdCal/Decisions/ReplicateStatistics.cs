@@ -22,7 +22,6 @@ internal readonly record struct ReplicateStatistics(double Mean, double Standard
         }
 
         var values = new double[replicates.Count];
-        var sum = new CompensatedSum();
         for (int i = 0; i < values.Length; i++)
         {
             Concentration c = replicates[i];
@@ -34,17 +33,10 @@ internal readonly record struct ReplicateStatistics(double Mean, double Standard
             }
 
             values[i] = c.In(limit.Value.Unit);
-            sum.Add(values[i]);
         }
 
-        double mean = sum.Value / values.Length;
-        var squares = new CompensatedSum();
-        foreach (double v in values)
-        {
-            squares.AddProductOfSquare(1, v - mean);
-        }
-
-        double s = Math.Sqrt(squares.Value / (values.Length - 1));
+        double mean = SampleStatistics.Mean(values);
+        double s = SampleStatistics.StandardDeviation(values, mean);
         if (double.IsInfinity(mean) || double.IsInfinity(s))
         {
             throw new ArgumentException($"Parameter '{paramName}': the mean or standard deviation of the replicates overflows a double.", paramName);

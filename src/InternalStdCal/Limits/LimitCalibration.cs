@@ -81,7 +81,7 @@ internal static class LimitCalibration
 
     /// <summary>Sample standard deviation (two-pass) of at least two finite values.</summary>
     internal static double StandardDeviation(double[] values) =>
-        ResponseFactorCalibration.StandardDeviation(values, ResponseFactorCalibration.Mean(values));
+        SampleStatistics.StandardDeviation(values);
 
     internal static double[] Finite(System.Collections.Generic.IReadOnlyList<double>? values, int minCount, string paramName)
     {

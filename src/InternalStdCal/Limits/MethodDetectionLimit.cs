@@ -59,8 +59,8 @@ public static class MethodDetectionLimit
 
         double[] spiked = spikedResults.Select((c, i) => In(c, unit, nameof(spikedResults), i)).ToArray();
         int ns = spiked.Length;
-        double spikedMean = ResponseFactorCalibration.Mean(spiked);
-        double ss = ResponseFactorCalibration.StandardDeviation(spiked, spikedMean);
+        double spikedMean = SampleStatistics.Mean(spiked);
+        double ss = SampleStatistics.StandardDeviation(spiked, spikedMean);
         if (!(ss > 0))
         {
             throw new ArgumentException($"Parameter '{nameof(spikedResults)}' holds {Text.I(ns)} equal results; S_s = 0 gives no MDL_S.", nameof(spikedResults));
@@ -125,8 +125,8 @@ public static class MethodDetectionLimit
 
             double[] values = blanks.Select(v => v!.Value).ToArray();
             blankCase = MdlBlankCase.MeanPlusTTimesSd;
-            blankMean = ResponseFactorCalibration.Mean(values);
-            blankSd = ResponseFactorCalibration.StandardDeviation(values, blankMean.Value);
+            blankMean = SampleStatistics.Mean(values);
+            blankSd = SampleStatistics.StandardDeviation(values, blankMean.Value);
             tb = StudentTQuantile.OneSided(0.99, nb - 1);
             double meanUsed = Math.Max(0, blankMean.Value);
             mdlB = meanUsed + (tb.Value * blankSd.Value);

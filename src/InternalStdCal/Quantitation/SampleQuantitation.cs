@@ -94,7 +94,7 @@ public static class SampleQuantitation
         if (perInjection.Count > 1)
         {
             double[] values = perInjection.Select(c => c.Value).ToArray();
-            spread = calibration.Conc(ResponseFactorCalibration.StandardDeviation(values, ResponseFactorCalibration.Mean(values)));
+            spread = calibration.Conc(SampleStatistics.StandardDeviation(values, SampleStatistics.Mean(values)));
         }
 
         return new QuantitationResult(

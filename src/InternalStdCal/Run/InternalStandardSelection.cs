@@ -347,28 +347,9 @@ public sealed class InternalStandardSelection
             Rsd(s), Rsd(ratios), analyteRsd, candidateLogSd, ratioLogSd, rho, threshold, f, r, t, n - 2, pImprove, pWorsen, Array.AsReadOnly(ratios), blankPercent);
     }
 
-    private static double Mean(double[] v)
-    {
-        var sum = default(CompensatedSum);
-        foreach (double x in v)
-        {
-            sum.Add(x);
-        }
+    private static double Mean(double[] v) => SampleStatistics.Mean(v);
 
-        return sum.Value / v.Length;
-    }
-
-    private static double CentredSumOfSquares(double[] v)
-    {
-        double m = Mean(v);
-        var sum = default(CompensatedSum);
-        foreach (double x in v)
-        {
-            sum.AddProductOfSquare(1, x - m);
-        }
-
-        return Math.Max(0, sum.Value);
-    }
+    private static double CentredSumOfSquares(double[] v) => SampleStatistics.CentredSumOfSquares(v, Mean(v));
 
     private static double Sd(double[] v) => Math.Sqrt(CentredSumOfSquares(v) / (v.Length - 1));
 
