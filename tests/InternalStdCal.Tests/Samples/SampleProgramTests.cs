@@ -44,6 +44,28 @@ public class SampleProgramTests
         Assert.Contains("Caution: ", output, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void ComplianceDemo_Run_PrintsEveryRuleAndThePlan()
+    {
+        string output = RunEntryPoint("ComplianceDemo");
+
+        Assert.Contains("Rule: Simple acceptance (w = 0)", output, StringComparison.Ordinal);
+        Assert.Contains("Inconclusive / ConditionalPass", output, StringComparison.Ordinal);
+        Assert.Contains("Plan: 14 replicates give power", output, StringComparison.Ordinal);
+        Assert.Contains("10 more", output, StringComparison.Ordinal);
+        Assert.Contains("never replace", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CalibrateDemo_Run_PrintsWeightingComparisonAndCalibration()
+    {
+        string output = RunEntryPoint("CalibrateDemo");
+
+        Assert.Contains("Weighting comparison", output, StringComparison.Ordinal);
+        Assert.Contains("Ratio calibration: straight line", output, StringComparison.Ordinal);
+        Assert.Contains("calibrated range", output, StringComparison.Ordinal);
+    }
+
     /// <summary>Runs a referenced sample's Main in this process and returns what it wrote to the console.</summary>
     private static string RunEntryPoint(string assemblyName)
     {
