@@ -1,0 +1,71 @@
+using System.Linq;
+using System.Threading.Tasks;
+using InternalStdCal.Calibration;
+using InternalStdCal.IO;
+using InternalStdCal.Run;
+using InternalStdCal.Tests.Calibration;
+using InternalStdCal.Tests.IO;
+using InternalStdCal.Uncertainty;
+using Xunit;
+
+namespace InternalStdCal.Tests.Run;
+
+// Thread safety (common practice for shared immutable results): processing the same run on many threads gives
+// bit-identical results to the serial run, and first use of a fit's lazily computed statistics from many threads
+// gives the serial values. Invented demo run; the check is equality with the serial result.
+public class RunProcessorThreadSafetyTests
+{
+    [Fact]
+    public void Process_ParallelRuns_BitIdenticalToSerial()
+    {
+        RunReport serial = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+        RunResults expected = RunResults.From(serial);
+        string expectedText = serial.ToString();
+
+        var results = new RunResults[16];
+        var texts = new string[16];
+        Parallel.For(0, results.Length, new ParallelOptions { MaxDegreeOfParallelism = 8 }, i =>
+        {
+            RunReport report = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+            results[i] = RunResults.From(report);
+            texts[i] = report.ToString();
+        });
+
+        Assert.All(results, r => Assert.Equal(expected, r));
+        Assert.All(texts, t => Assert.Equal(expectedText, t));
+    }
+
+    [Fact]
+    public void RegressionFit_LazyStatisticsFirstUsedFromManyThreads_EqualSerialValues()
+    {
+        // Miller & Miller fluorescence standards (field-reference §1.2; data from memory), used here only as data.
+        CalibrationStandard[] standards = FieldReferenceStandards.Fluorescence().ToArray();
+        RegressionFit reference = RegressionCalibration.Fit(standards, CalibrationModel.Linear).Regression;
+        double s = reference.ResidualStandardDeviation, r = reference.CorrelationCoefficient, v = reference.Covariance(1, 1);
+
+        for (int attempt = 0; attempt < 20; attempt++)
+        {
+            RegressionFit shared = RegressionCalibration.Fit(standards, CalibrationModel.Linear).Regression;
+            var seen = new (double S, double R, double V, int Residuals)[8];
+            Parallel.For(0, seen.Length, i => seen[i] = (shared.ResidualStandardDeviation, shared.CorrelationCoefficient, shared.Covariance(1, 1), shared.Residuals.Count));
+            Assert.All(seen, x => Assert.Equal((s, r, v, standards.Length), x));
+        }
+    }
+
+    [Fact]
+    public void EvaluateMonteCarlo_SameSeedOnManyThreads_BitIdentical()
+    {
+        MeasurementModel model = MeasurementModel.Product(
+            "y", "mg/L", 1, new[] { UncertainInput.Rectangular("a", 1, 0.1), UncertainInput.Normal("b", 2, 0.05) }, new[] { 1.0, -1.0 });
+        MonteCarloEvaluation serial = model.EvaluateMonteCarlo(100_000, 7);
+        var parallel = new MonteCarloEvaluation[6];
+        Parallel.For(0, parallel.Length, i => parallel[i] = model.EvaluateMonteCarlo(100_000, 7));
+        Assert.All(parallel, p =>
+        {
+            Assert.Equal(serial.Value, p.Value);
+            Assert.Equal(serial.StandardUncertainty, p.StandardUncertainty);
+            Assert.Equal(serial.ShortestInterval.Lower, p.ShortestInterval.Lower);
+            Assert.Equal(serial.SymmetricInterval.Upper, p.SymmetricInterval.Upper);
+        });
+    }
+}
