@@ -1,6 +1,3 @@
-using System;
-using System.Globalization;
-
 namespace InternalStdCal.Calibration;
 
 /// <summary>
@@ -11,68 +8,48 @@ namespace InternalStdCal.Calibration;
 /// units; <see cref="MeanResponse"/> in y units.</remarks>
 public sealed class InversePrediction
 {
-    internal InversePrediction(
-        double value,
-        double standardError,
-        ConfidenceInterval interval,
-        int degreesOfFreedom,
-        int replicates,
-        double meanResponse,
-        double unknownWeight,
-        ExtrapolationStatus extrapolation,
-        string method)
+    private readonly InverseEstimate _estimate;
+
+    internal InversePrediction(InverseEstimate estimate, string method)
     {
-        Value = value;
-        StandardError = standardError;
-        Interval = interval;
-        DegreesOfFreedom = degreesOfFreedom;
-        Replicates = replicates;
-        MeanResponse = meanResponse;
-        UnknownWeight = unknownWeight;
-        Extrapolation = extrapolation;
+        _estimate = estimate;
         Method = method;
     }
 
     /// <summary>Predicted x0 (x units).</summary>
-    public double Value { get; }
+    public double Value => _estimate.Value;
 
     /// <summary>Standard error s_x0 of <see cref="Value"/> (x units; ≥ 0, 0 for a perfect fit).</summary>
-    public double StandardError { get; }
+    public double StandardError => _estimate.StandardError;
 
     /// <summary>Symmetric interval x0 ± t((1 + P)/2, n − p)·s_x0.</summary>
-    public ConfidenceInterval Interval { get; }
+    public ConfidenceInterval Interval => _estimate.Interval;
 
     /// <summary>Degrees of freedom of the t quantile, n − p (points minus fitted parameters).</summary>
-    public int DegreesOfFreedom { get; }
+    public int DegreesOfFreedom => _estimate.DegreesOfFreedom;
 
     /// <summary>Number m of replicate responses averaged into <see cref="MeanResponse"/> (≥ 1).</summary>
-    public int Replicates { get; }
+    public int Replicates => _estimate.Replicates;
 
     /// <summary>Mean response ȳ0 of the unknown (y units).</summary>
-    public double MeanResponse { get; }
+    public double MeanResponse => _estimate.MeanResponse;
 
     /// <summary>
     /// Weight w0 of the unknown on the fit's normalised scale (the scale of <see cref="RegressionFit.Weights"/>,
     /// Σw = n); 1 for an unweighted fit.
     /// </summary>
-    public double UnknownWeight { get; }
+    public double UnknownWeight => _estimate.UnknownWeight;
 
     /// <summary>Position of x0 relative to the standards.</summary>
-    public ExtrapolationStatus Extrapolation { get; }
+    public ExtrapolationStatus Extrapolation => _estimate.Extrapolation;
 
     /// <summary>True unless <see cref="Extrapolation"/> is <see cref="ExtrapolationStatus.WithinRange"/>.</summary>
-    public bool IsExtrapolated => Extrapolation != ExtrapolationStatus.WithinRange;
+    public bool IsExtrapolated => _estimate.IsExtrapolated;
 
     /// <summary>Which formula gave <see cref="StandardError"/> and how <see cref="UnknownWeight"/> was chosen.</summary>
     public string Method { get; }
 
     /// <summary>Invariant text such as <c>6.2072 ± 0.6163 (95%)</c>, shortest round-trip digits.</summary>
     /// <returns>Text for display.</returns>
-    public override string ToString() =>
-        string.Format(
-            CultureInfo.InvariantCulture,
-            "{0} ± {1} ({2})",
-            Value.ToString("R", CultureInfo.InvariantCulture),
-            Interval.HalfWidth.ToString("R", CultureInfo.InvariantCulture),
-            Interval.ConfidenceLevel.ToString("0.######%", CultureInfo.InvariantCulture));
+    public override string ToString() => _estimate.ToString();
 }

@@ -704,14 +704,7 @@ public sealed class RegressionFit
     {
         InverseEstimate e = EstimateInverse(meanResponse, replicates, confidenceLevel, unknownWeight);
         return new InversePrediction(
-            e.Value,
-            e.StandardError,
-            e.Interval,
-            e.DegreesOfFreedom,
-            e.Replicates,
-            e.MeanResponse,
-            e.UnknownWeight,
-            e.Extrapolation,
+            e,
             InverseFormula() + "; " + WeightNote(e.Value, meanResponse, unknownWeight));
     }
 
