@@ -130,7 +130,7 @@ public sealed class ComplianceDecision
     };
 
     /// <summary>A short justification, e.g. "Non-compliant (zone: fail): mean of 4 replicates 10.6 mg/L is above the
-    /// rejection limit 10.3038 mg/L (upper limit 10 mg/L). Rule: ...", followed by u, the guard band, the test
+    /// rejection limit 10.3038 mg/L of the upper limit 10 mg/L. Rule: ...", followed by u, the guard band, the test
     /// statistic and the probability beyond the limit with the distribution used.</summary>
     /// <returns>The text (invariant culture).</returns>
     public override string ToString()
@@ -159,7 +159,7 @@ public sealed class ComplianceDecision
             ComplianceOutcome.NonCompliant => (upper ? "above the " : "below the ") + (binary ? decisionLimit : "rejection limit ") + C(RejectionLimit),
             _ => "between the acceptance limit " + C(AcceptanceLimit) + " and the rejection limit " + C(RejectionLimit),
         });
-        text.Append(" (").Append(Limit).Append("). Rule: ").Append(Rule.Name);
+        text.Append(" of the ").Append(Limit).Append(". Rule: ").Append(Rule.Name);
         text.Append("; u = ").Append(C(StandardUncertainty));
         if (ReplicateStandardDeviation is Concentration s)
         {

@@ -7,11 +7,14 @@ namespace InternalStdCal.Uncertainty;
 /// <remarks>Immutable; exact equality.</remarks>
 public readonly struct CoverageInterval : IEquatable<CoverageInterval>
 {
-    internal CoverageInterval(double lower, double upper, double probability)
+    private readonly string? _unit;
+
+    internal CoverageInterval(double lower, double upper, double probability, string unit)
     {
         Lower = lower;
         Upper = upper;
         Probability = probability;
+        _unit = unit;
     }
 
     /// <summary>Lower end, in the unit of the output.</summary>
@@ -22,6 +25,10 @@ public readonly struct CoverageInterval : IEquatable<CoverageInterval>
 
     /// <summary>Coverage probability p, in (0, 1).</summary>
     public double Probability { get; }
+
+    /// <summary>The output unit as the model states it (<see cref="MeasurementModel.OutputUnit"/>); empty when the
+    /// model gives none.</summary>
+    public string Unit => _unit ?? string.Empty;
 
     /// <summary>Upper − Lower.</summary>
     public double Length => Upper - Lower;
@@ -43,17 +50,17 @@ public readonly struct CoverageInterval : IEquatable<CoverageInterval>
 
     /// <inheritdoc />
     public bool Equals(CoverageInterval other) =>
-        Lower.Equals(other.Lower) && Upper.Equals(other.Upper) && Probability.Equals(other.Probability);
+        Lower.Equals(other.Lower) && Upper.Equals(other.Upper) && Probability.Equals(other.Probability) && string.Equals(Unit, other.Unit, StringComparison.Ordinal);
 
     /// <inheritdoc />
     public override bool Equals(object? obj) => obj is CoverageInterval other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Lower.GetHashCode() * 397) ^ Upper.GetHashCode() ^ Probability.GetHashCode();
+    public override int GetHashCode() => (Lower.GetHashCode() * 397) ^ Upper.GetHashCode() ^ Probability.GetHashCode() ^ StringComparer.Ordinal.GetHashCode(Unit);
 
-    /// <summary>Prints e.g. "[9.8, 10.2] (95 %)" (invariant culture).</summary>
+    /// <summary>Prints e.g. "[9.8, 10.2] mg/L (95 %)", or "[9.8, 10.2] (95 %)" without a unit (invariant culture).</summary>
     /// <returns>The text.</returns>
     public override string ToString() =>
-        "[" + Lower.ToString("G6", CultureInfo.InvariantCulture) + ", " + Upper.ToString("G6", CultureInfo.InvariantCulture) + "] ("
-        + (100 * Probability).ToString("G4", CultureInfo.InvariantCulture) + " %)";
+        "[" + Lower.ToString("G6", CultureInfo.InvariantCulture) + ", " + Upper.ToString("G6", CultureInfo.InvariantCulture) + "]"
+        + (Unit.Length > 0 ? " " + Unit : string.Empty) + " (" + (100 * Probability).ToString("G4", CultureInfo.InvariantCulture) + " %)";
 }

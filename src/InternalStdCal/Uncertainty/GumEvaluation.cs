@@ -65,7 +65,7 @@ public sealed class GumEvaluation
     public double ExpandedUncertainty => CoverageFactor * StandardUncertainty;
 
     /// <summary>The coverage interval y ± U.</summary>
-    public CoverageInterval Interval => new(Value - ExpandedUncertainty, Value + ExpandedUncertainty, CoverageProbability);
+    public CoverageInterval Interval => new(Value - ExpandedUncertainty, Value + ExpandedUncertainty, CoverageProbability, Model.OutputUnit);
 
     /// <summary>One row per input, in model order.</summary>
     public IReadOnlyList<InputContribution> Contributions { get; }

@@ -34,8 +34,8 @@ public sealed class MonteCarloEvaluation
         Value = s.Mean;
         StandardUncertainty = s.StandardDeviation;
         CoverageProbability = p;
-        SymmetricInterval = new CoverageInterval(s.SymmetricLow, s.SymmetricHigh, p);
-        ShortestInterval = new CoverageInterval(s.ShortestLow, s.ShortestHigh, p);
+        SymmetricInterval = new CoverageInterval(s.SymmetricLow, s.SymmetricHigh, p, model.OutputUnit);
+        ShortestInterval = new CoverageInterval(s.ShortestLow, s.ShortestHigh, p, model.OutputUnit);
         Trials = trials;
         Seed = seed;
         IsAdaptive = adaptive;

@@ -38,7 +38,7 @@ internal static class CrossBuildScenarios
     internal static string Fits()
     {
         var text = new StringBuilder();
-        foreach (double scale in new[] { 1e-120, 1.0, 1e120, 1e300 })
+        foreach (double scale in new[] { 1e-120, 1.0, 1e120 })
         {
             var random = new Xoshiro256StarStar(20261202);
             var x = new double[12];

@@ -36,7 +36,6 @@ public class CrossBuildTests
     {
         string netStandard = Invoke(typeof(CrossBuildScenarios), scenario);
         string net8 = RunInNet8Context(scenario);
-        System.IO.File.WriteAllText("/tmp/ns-" + scenario + ".txt", netStandard); System.IO.File.WriteAllText("/tmp/n8-" + scenario + ".txt", net8);
         Assert.Equal(net8, netStandard);
     }
 

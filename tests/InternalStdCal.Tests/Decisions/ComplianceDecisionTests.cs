@@ -22,6 +22,22 @@ public class ComplianceDecisionTests
         Assert.Contains("P(true value > limit) = 99.06 % (Student t, ν = 3)", text, StringComparison.Ordinal);
     }
 
+    // Same example with a named limit: the limit's name is printed once, inside one pair of parentheses. Values
+    // from field-reference §8.2 (COMPUTED): s = 0.258199, u = s/√4, w = t(0.95, 3)·u = 2.35336·u, t = 0.6/u.
+    [Fact]
+    public void ToString_NamedLimit_ExactTextWithoutNestedParentheses()
+    {
+        var limit = SpecificationLimit.Upper(Mg(10), "maximum permitted value");
+        Concentration[] replicates = { Mg(10.5), Mg(10.9), Mg(10.3), Mg(10.7) };
+        string text = DecisionRule.OneSidedTTest(0.05, DecisionMode.NonBinary).Assess(limit, replicates).ToString();
+
+        Assert.Equal(
+            "Non-compliant (zone: fail): mean of 4 replicates 10.6 mg/L is above the rejection limit 10.3038 mg/L of the upper limit 10 mg/L (maximum permitted value). "
+            + "Rule: One-sided t test at α = 0.05, non-binary (ILAC G8 zones); u = 0.129099 mg/L (s = 0.258199 mg/L), w = 2.35336·u = 0.303818 mg/L, t = 4.64758. "
+            + "P(true value > limit) = 99.06 % (Student t, ν = 3).",
+            text);
+    }
+
     // ILAC G8:09/2019 (VERIFIED, field-reference §8.1): binary guarded acceptance with w = U, k = 2.
     [Fact]
     public void ToString_BinaryRule_NamesTheDecisionLimit()
