@@ -105,7 +105,7 @@ public static class RunCsv
                     Row(d, cells, columns, cache);
                 }
 
-                if (line > rowLine && d.Problems.Count > 0)
+                if (line > rowLine && (d.Problems.Count > 0 || RunAssembler.Build(d) is null))
                 {
                     // A bad row whose quoted field runs over line breaks most likely has an unclosed quote that swallowed
                     // the lines below it: only its first line is left out, and reading goes on from the next line.

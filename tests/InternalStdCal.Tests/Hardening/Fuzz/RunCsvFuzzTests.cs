@@ -116,6 +116,19 @@ public class RunCsvFuzzTests
     }
 
     [Fact]
+    public void Read_StrayQuoteClosedRowsLater_KeepsTheRowsBetween()
+    {
+        // Regression (found by the fuzz property above): the quote opened in line 2 closed in line 4, the merged record
+        // had the header's field count and failed only the role checks, so line 3 was lost without a problem.
+        const string Text = "order,role,id,parent,analyte:Cd,is:Rh\n1,sample,S1,\"x,1,2\n2,sample,S2,,3,4\n3,sample,S3,\"x,5,6\n";
+
+        RunReadResult r = RunCsv.Read(new StringReader(Text), "t");
+
+        Assert.Equal(new[] { 2, 4 }, r.Problems.Select(p => p.Line));
+        Assert.Equal(2, Assert.Single(r.Run!.Injections).Order);
+    }
+
+    [Fact]
     public void Read_ByteOrderMarkInTheText_ReadsLikeTheFileWithout()
     {
         // A BOM decoded into the text (e.g. File.ReadAllText of a file written with a BOM by another encoding path)
