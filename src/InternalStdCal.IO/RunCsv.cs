@@ -24,7 +24,8 @@ namespace InternalStdCal.IO;
 /// <para>Lenient reading (<see cref="Read"/>): every problem is reported with its line, column and value, and only
 /// the rows with a problem are left out; a file whose header lacks a required column gives no run. Strict reading
 /// (<see cref="ReadStrict"/>) throws <see cref="RunFileException"/> listing every problem. Fields are split by the
-/// CSV library (RFC 4180 quoting; malformed quotes are read leniently so later rows are not lost).</para>
+/// CSV library (RFC 4180 quoting; malformed quotes are read leniently so later rows are not lost: a bad row whose quoted
+/// field runs over line breaks is reported on its first line and reading goes on from the next line).</para>
 /// </remarks>
 public static class RunCsv
 {

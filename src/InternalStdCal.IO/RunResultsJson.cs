@@ -57,7 +57,8 @@ public static class RunResultsJson
     /// <param name="reader">The JSON text; not disposed.</param>
     /// <returns>The results.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="reader"/> is null.</exception>
-    /// <exception cref="RunFileException">The text is not valid JSON, does not match the schema, or has another
+    /// <exception cref="RunFileException">The text is not valid JSON, does not match the schema (including a number beyond
+    /// the range of a double, or null where the schema holds a list, list element or name), or has another
     /// <c>format</c> tag (the problem names the line, position and JSON path).</exception>
     public static RunResults Read(TextReader reader)
     {
