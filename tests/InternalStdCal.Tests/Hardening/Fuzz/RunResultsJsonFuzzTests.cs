@@ -29,7 +29,7 @@ public class RunResultsJsonFuzzTests
 
     private static Arbitrary<int> Seeds => Gen.Choose(0, int.MaxValue).ToArbitrary();
 
-    [Property(MaxTest = 300)]
+    [Property(MaxTest = 150)]
     public Property Read_MutatedValues_ReturnsUsableResultsOrThrowsRunFileException() =>
         Prop.ForAll(Seeds, seed =>
         {
@@ -66,7 +66,7 @@ public class RunResultsJsonFuzzTests
             ReadAndUse(text);
         });
 
-    [Property(MaxTest = 200)]
+    [Property(MaxTest = 100)]
     public Property Read_DamagedText_ReturnsUsableResultsOrThrowsRunFileException() =>
         Prop.ForAll(Seeds, seed =>
         {
