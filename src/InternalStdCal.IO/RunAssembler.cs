@@ -96,7 +96,8 @@ internal static class RunAssembler
 
     private static string Text(int i) => i.ToString(System.Globalization.CultureInfo.InvariantCulture);
 
-    private static RunInjection? Build(RowDraft d)
+    /// <summary>The row's injection, or null with the row's problems added to the draft.</summary>
+    internal static RunInjection? Build(RowDraft d)
     {
         if (d.Order is not int order || d.Role is not InjectionRole role || d.Id is null)
         {

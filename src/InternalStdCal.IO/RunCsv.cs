@@ -24,7 +24,8 @@ namespace InternalStdCal.IO;
 /// <para>Lenient reading (<see cref="Read"/>): every problem is reported with its line, column and value, and only
 /// the rows with a problem are left out; a file whose header lacks a required column gives no run. Strict reading
 /// (<see cref="ReadStrict"/>) throws <see cref="RunFileException"/> listing every problem. Fields are split by the
-/// CSV library (RFC 4180 quoting; malformed quotes are read leniently so later rows are not lost).</para>
+/// CSV library (RFC 4180 quoting; malformed quotes are read leniently so later rows are not lost: a bad row whose quoted
+/// field runs over line breaks is reported on its first line and reading goes on from the next line).</para>
 /// </remarks>
 public static class RunCsv
 {
@@ -63,10 +64,11 @@ public static class RunCsv
 
         var fileProblems = new List<RunFileProblem>();
         var drafts = new List<RowDraft>();
+        string text = RunText.WithoutByteOrderMark(reader.ReadToEnd());
         CsvDataReader csv;
         try
         {
-            csv = CsvDataReader.Create(reader, options);
+            csv = CsvDataReader.Create(new StringReader(text), options);
         }
         catch (CsvMissingHeadersException)
         {
@@ -74,7 +76,6 @@ public static class RunCsv
             return RunAssembler.Assemble(runName, Array.Empty<string>(), Array.Empty<string>(), new Dictionary<string, Concentration>(), fileProblems, Array.Empty<RowDraft>(), fatal: true);
         }
 
-        using var owned = csv;
         int headerLine = line + 1;
         string[] names = Enumerable.Range(0, csv.FieldCount).Select(i => csv.GetName(i) ?? string.Empty).ToArray();
         line = headerLine + names.Sum(Breaks);
@@ -82,25 +83,46 @@ public static class RunCsv
         string[] analytes = columns.Where(c => c.Kind == Kind.Analyte).Select(c => c.Name).ToArray();
         string[] internalStandards = columns.Where(c => c.Kind == Kind.InternalStandard).Select(c => c.Name).ToArray();
         var cache = new PreparationCache();
-        while (!fatal && Next(csv, line, fileProblems))
+        try
         {
-            int rowLine = line + 1;
-            string[] cells = Enumerable.Range(0, csv.RowFieldCount).Select(i => csv.GetString(i)).ToArray();
-            line = rowLine + cells.Sum(Breaks);
-            if (cells.All(c => c.Trim().Length == 0))
+            while (!fatal && Next(csv, line, fileProblems))
             {
-                continue;
-            }
+                int rowLine = line + 1;
+                string[] cells = Enumerable.Range(0, csv.RowFieldCount).Select(i => csv.GetString(i)).ToArray();
+                line = rowLine + cells.Sum(Breaks);
+                if (cells.All(c => c.Trim().Length == 0))
+                {
+                    continue;
+                }
 
-            var d = new RowDraft(rowLine);
-            drafts.Add(d);
-            if (cells.Length != names.Length)
-            {
-                d.Problem(Math.Min(cells.Length, names.Length) + 1, null, null, FormattableString.Invariant($"the row has {cells.Length} fields; the header has {names.Length}"));
-                continue;
-            }
+                var d = new RowDraft(rowLine);
+                drafts.Add(d);
+                if (cells.Length != names.Length)
+                {
+                    d.Problem(Math.Min(cells.Length, names.Length) + 1, null, null, FormattableString.Invariant($"the row has {cells.Length} fields; the header has {names.Length}"));
+                }
+                else
+                {
+                    Row(d, cells, columns, cache);
+                }
 
-            Row(d, cells, columns, cache);
+                if (line > rowLine && (d.Problems.Count > 0 || RunAssembler.Build(d) is null))
+                {
+                    // A bad row whose quoted field runs over line breaks most likely has an unclosed quote that swallowed
+                    // the lines below it: only its first line is left out, and reading goes on from the next line.
+                    int field = Array.FindIndex(cells, c => c.Contains('\n'));
+                    d.Problems.Clear();
+                    d.Problem(field + 1, field < names.Length ? names[field] : null, cells[field].Substring(0, cells[field].IndexOf('\n')).TrimEnd('\r'), "a quoted field is not closed on this line and the row is bad; the line is left out and the next line is read as a new row");
+                    line = rowLine;
+                    csv.Dispose();
+                    options.HasHeaders = false;
+                    csv = CsvDataReader.Create(new StringReader(text.Substring(LineStart(text, rowLine + 1))), options);
+                }
+            }
+        }
+        finally
+        {
+            csv.Dispose();
         }
 
         return RunAssembler.Assemble(runName, analytes, internalStandards, isConcentrations, fileProblems, drafts, fatal);
@@ -219,6 +241,18 @@ public static class RunCsv
     }
 
     private static int Breaks(string s) => s.Count(ch => ch == '\n');
+
+    /// <summary>Offset of the first character of a 1-based physical line (lines end with '\n').</summary>
+    private static int LineStart(string text, int line)
+    {
+        int at = 0;
+        for (int n = 1; n < line; n++)
+        {
+            at = text.IndexOf('\n', at) + 1;
+        }
+
+        return at;
+    }
 
     // The CSV library throws only on what it cannot split at all (e.g. a record larger than its buffer): reported,
     // and the rows read so far are kept.

@@ -37,7 +37,7 @@ public static class RunJson
     public static RunReadResult Read(TextReader reader)
     {
         Guard.NotNull(reader, nameof(reader));
-        string text = reader.ReadToEnd();
+        string text = RunText.WithoutByteOrderMark(reader.ReadToEnd());
         var fileProblems = new List<RunFileProblem>();
         var isConc = new SortedDictionary<string, Concentration>(StringComparer.Ordinal);
         JsonDocument doc;
@@ -55,103 +55,127 @@ public static class RunJson
 
         using (doc)
         {
-            JsonElement root = doc.RootElement;
-            void Fatal(string path, string message) => fileProblems.Add(new RunFileProblem(0, 0, path, null, message));
-            if (root.ValueKind != JsonValueKind.Object)
+            try
             {
-                Fatal("$", "the document must be an object with name, analytes, internalStandards and injections");
+                return Document(doc.RootElement, fileProblems, isConc);
+            }
+            catch (InvalidOperationException ex)
+            {
+                // System.Text.Json refuses to return a string holding a lone surrogate escape ("\ud800").
+                fileProblems.Add(new RunFileProblem(0, 0, null, null, "a name in the document is not valid Unicode: " + ex.Message));
                 return RunAssembler.Assemble("-", Array.Empty<string>(), Array.Empty<string>(), isConc, fileProblems, Array.Empty<RowDraft>(), fatal: true);
             }
+        }
+    }
 
-            string? name = root.TryGetProperty("name", out JsonElement n) && n.ValueKind == JsonValueKind.String && !string.IsNullOrWhiteSpace(n.GetString()) ? n.GetString() : null;
-            if (name is null)
-            {
-                Fatal("name", "the run name (a non-blank string) is required");
-            }
+    private static RunReadResult Document(JsonElement root, List<RunFileProblem> fileProblems, SortedDictionary<string, Concentration> isConc)
+    {
+        void Fatal(string path, string message) => fileProblems.Add(new RunFileProblem(0, 0, path, null, message));
+        if (root.ValueKind != JsonValueKind.Object)
+        {
+            Fatal("$", "the document must be an object with name, analytes, internalStandards and injections");
+            return RunAssembler.Assemble("-", Array.Empty<string>(), Array.Empty<string>(), isConc, fileProblems, Array.Empty<RowDraft>(), fatal: true);
+        }
 
-            var analytes = new List<string>();
-            if (root.TryGetProperty("analytes", out JsonElement a) && a.ValueKind == JsonValueKind.Array)
+        string? name = root.TryGetProperty("name", out JsonElement n) && n.ValueKind == JsonValueKind.String && !string.IsNullOrWhiteSpace(n.GetString()) ? n.GetString() : null;
+        if (name is null)
+        {
+            Fatal("name", "the run name (a non-blank string) is required");
+        }
+
+        var analytes = new List<string>();
+        if (root.TryGetProperty("analytes", out JsonElement a) && a.ValueKind == JsonValueKind.Array)
+        {
+            int i = 0;
+            foreach (JsonElement e in a.EnumerateArray())
             {
-                int i = 0;
-                foreach (JsonElement e in a.EnumerateArray())
+                if (e.ValueKind == JsonValueKind.String && !string.IsNullOrWhiteSpace(e.GetString()) && !analytes.Contains(e.GetString()!))
                 {
-                    if (e.ValueKind == JsonValueKind.String && !string.IsNullOrWhiteSpace(e.GetString()) && !analytes.Contains(e.GetString()!))
+                    analytes.Add(e.GetString()!);
+                }
+                else
+                {
+                    fileProblems.Add(new RunFileProblem(0, 0, Path("analytes", i), e.GetRawText(), "an analyte must be a non-blank string, named once; ignored"));
+                }
+
+                i++;
+            }
+        }
+
+        if (analytes.Count == 0)
+        {
+            Fatal("analytes", "at least one analyte (array of names) is required");
+        }
+
+        var internalStandards = new List<string>();
+        if (root.TryGetProperty("internalStandards", out JsonElement s) && s.ValueKind == JsonValueKind.Array)
+        {
+            int i = 0;
+            foreach (JsonElement e in s.EnumerateArray())
+            {
+                string path = Path("internalStandards", i++);
+                string? isName = e.ValueKind == JsonValueKind.Object && e.TryGetProperty("name", out JsonElement en) && en.ValueKind == JsonValueKind.String ? en.GetString() : null;
+                if (string.IsNullOrWhiteSpace(isName) || internalStandards.Contains(isName!))
+                {
+                    fileProblems.Add(new RunFileProblem(0, 0, path, e.GetRawText(), "an internal standard must be an object with a non-blank, unique \"name\" (and optional \"concentration\"); ignored"));
+                    continue;
+                }
+
+                internalStandards.Add(isName!);
+                if (e.TryGetProperty("concentration", out JsonElement ec) && ec.ValueKind != JsonValueKind.Null)
+                {
+                    Concentration c = default;
+                    string? err = ec.ValueKind == JsonValueKind.String ? RunText.Concentration(ec.GetString()!, null, out c) : "must be a string \"number unit\"";
+                    if (err is null && !(c.Value > 0))
                     {
-                        analytes.Add(e.GetString()!);
+                        err = "must be > 0";
+                    }
+
+                    if (err is null)
+                    {
+                        isConc[isName!] = c;
                     }
                     else
                     {
-                        fileProblems.Add(new RunFileProblem(0, 0, Path("analytes", i), e.GetRawText(), "an analyte must be a non-blank string, named once; ignored"));
-                    }
-
-                    i++;
-                }
-            }
-
-            if (analytes.Count == 0)
-            {
-                Fatal("analytes", "at least one analyte (array of names) is required");
-            }
-
-            var internalStandards = new List<string>();
-            if (root.TryGetProperty("internalStandards", out JsonElement s) && s.ValueKind == JsonValueKind.Array)
-            {
-                int i = 0;
-                foreach (JsonElement e in s.EnumerateArray())
-                {
-                    string path = Path("internalStandards", i++);
-                    string? isName = e.ValueKind == JsonValueKind.Object && e.TryGetProperty("name", out JsonElement en) && en.ValueKind == JsonValueKind.String ? en.GetString() : null;
-                    if (string.IsNullOrWhiteSpace(isName) || internalStandards.Contains(isName!))
-                    {
-                        fileProblems.Add(new RunFileProblem(0, 0, path, e.GetRawText(), "an internal standard must be an object with a non-blank, unique \"name\" (and optional \"concentration\"); ignored"));
-                        continue;
-                    }
-
-                    internalStandards.Add(isName!);
-                    if (e.TryGetProperty("concentration", out JsonElement ec) && ec.ValueKind != JsonValueKind.Null)
-                    {
-                        Concentration c = default;
-                        string? err = ec.ValueKind == JsonValueKind.String ? RunText.Concentration(ec.GetString()!, null, out c) : "must be a string \"number unit\"";
-                        if (err is null && !(c.Value > 0))
-                        {
-                            err = "must be > 0";
-                        }
-
-                        if (err is null)
-                        {
-                            isConc[isName!] = c;
-                        }
-                        else
-                        {
-                            fileProblems.Add(new RunFileProblem(0, 0, path + ".concentration", ec.GetRawText(), "IS concentration " + err));
-                        }
+                        fileProblems.Add(new RunFileProblem(0, 0, path + ".concentration", ec.GetRawText(), "IS concentration " + err));
                     }
                 }
             }
-
-            if (internalStandards.Count == 0)
-            {
-                Fatal("internalStandards", "at least one internal standard is required");
-            }
-
-            var drafts = new List<RowDraft>();
-            if (!root.TryGetProperty("injections", out JsonElement inj) || inj.ValueKind != JsonValueKind.Array)
-            {
-                Fatal("injections", "the injections (an array of objects) are required");
-            }
-            else
-            {
-                var cache = new PreparationCache();
-                int i = 0;
-                foreach (JsonElement e in inj.EnumerateArray())
-                {
-                    drafts.Add(Injection(e, Path("injections", i++), analytes, internalStandards, cache));
-                }
-            }
-
-            bool fatal = name is null || analytes.Count == 0 || internalStandards.Count == 0 || drafts.Count == 0 && fileProblems.Count > 0;
-            return RunAssembler.Assemble(name ?? "-", analytes, internalStandards, isConc, fileProblems, drafts, fatal);
         }
+
+        if (internalStandards.Count == 0)
+        {
+            Fatal("internalStandards", "at least one internal standard is required");
+        }
+
+        var drafts = new List<RowDraft>();
+        if (!root.TryGetProperty("injections", out JsonElement inj) || inj.ValueKind != JsonValueKind.Array)
+        {
+            Fatal("injections", "the injections (an array of objects) are required");
+        }
+        else
+        {
+            var cache = new PreparationCache();
+            int i = 0;
+            foreach (JsonElement e in inj.EnumerateArray())
+            {
+                string path = Path("injections", i++);
+                try
+                {
+                    drafts.Add(Injection(e, path, analytes, internalStandards, cache));
+                }
+                catch (InvalidOperationException ex)
+                {
+                    // System.Text.Json refuses to return a string holding a lone surrogate escape ("\ud800").
+                    var d = new RowDraft(0);
+                    d.Problem(0, path, null, "the injection holds a string or name that is not valid Unicode: " + ex.Message);
+                    drafts.Add(d);
+                }
+            }
+        }
+
+        bool fatal = name is null || analytes.Count == 0 || internalStandards.Count == 0 || drafts.Count == 0 && fileProblems.Count > 0;
+        return RunAssembler.Assemble(name ?? "-", analytes, internalStandards, isConc, fileProblems, drafts, fatal);
     }
 
     /// <summary>Reads a run file leniently (see <see cref="Read"/>).</summary>

@@ -1,6 +1,9 @@
 using System;
+using System.Collections;
+using System.Collections.Generic;
 using System.Globalization;
 using System.IO;
+using System.Reflection;
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
@@ -54,7 +57,8 @@ public static class RunResultsJson
     /// <param name="reader">The JSON text; not disposed.</param>
     /// <returns>The results.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="reader"/> is null.</exception>
-    /// <exception cref="RunFileException">The text is not valid JSON, does not match the schema, or has another
+    /// <exception cref="RunFileException">The text is not valid JSON, does not match the schema (including a number beyond
+    /// the range of a double, or null where the schema holds a list, list element or name), or has another
     /// <c>format</c> tag (the problem names the line, position and JSON path).</exception>
     public static RunResults Read(TextReader reader)
     {
@@ -74,7 +78,74 @@ public static class RunResultsJson
             throw new RunFileException(new[] { new RunFileProblem(0, 0, "format", results?.Format, "expected a results document with format '" + RunResults.CurrentFormat + "'") });
         }
 
+        if (FirstNull(results, "$") is string at)
+        {
+            throw new RunFileException(new[] { new RunFileProblem(0, 0, at, "null", "null where the results schema requires a value (a missing list reads as empty; null does not)") });
+        }
+
         return results;
+    }
+
+    /// <summary>The JSON path of the first null that the results types declare non-nullable (System.Text.Json 8 lets such
+    /// nulls through), or null when there is none. Reads the compiler's nullable metadata, so new members are covered.</summary>
+    private static string? FirstNull(object value, string path)
+    {
+        foreach (PropertyInfo p in value.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance))
+        {
+            if (p.PropertyType.IsValueType || p.GetIndexParameters().Length > 0)
+            {
+                continue;
+            }
+
+            string at = path + "." + Options.PropertyNamingPolicy!.ConvertName(p.Name);
+            object? v = p.GetValue(value);
+            if (v is null)
+            {
+                if ((NullableFlag(p.CustomAttributes, "NullableAttribute") ?? NullableFlag(p.DeclaringType!.CustomAttributes, "NullableContextAttribute")) == 1)
+                {
+                    return at;
+                }
+
+                continue;
+            }
+
+            if (v is string || v is not IEnumerable items)
+            {
+                continue;
+            }
+
+            int i = 0;
+            foreach (object? x in items)
+            {
+                string element = at + "[" + i++.ToString(CultureInfo.InvariantCulture) + "]";
+                if (x is null)
+                {
+                    return element;
+                }
+
+                if (x.GetType().Namespace == typeof(RunResults).Namespace && FirstNull(x, element) is string inner)
+                {
+                    return inner;
+                }
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>First flag of a compiler nullable attribute: 1 = not null, 2 = may be null; null when absent.</summary>
+    private static byte? NullableFlag(IEnumerable<CustomAttributeData> attributes, string name)
+    {
+        foreach (CustomAttributeData a in attributes)
+        {
+            if (a.AttributeType.FullName == "System.Runtime.CompilerServices." + name)
+            {
+                object? v = a.ConstructorArguments[0].Value;
+                return v is byte b ? b : v is IReadOnlyList<CustomAttributeTypedArgument> list ? (byte?)list[0].Value : null;
+            }
+        }
+
+        return null;
     }
 
     private static JsonSerializerOptions CreateOptions()
@@ -86,6 +157,7 @@ public static class RunResultsJson
             Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
             NumberHandling = JsonNumberHandling.Strict,
         };
+        o.Converters.Add(new FiniteDoubleConverter());
         o.Converters.Add(new ConcentrationConverter());
         o.Converters.Add(new RoleConverter());
         o.Converters.Add(new JsonStringEnumConverter());
@@ -121,12 +193,19 @@ public static class RunResultsJson
                 }
             }
 
-            if (value is null || unit is null || RunText.Unit(unit, out ConcentrationUnit u) is string error)
+            if (value is not double v || double.IsNaN(v) || double.IsInfinity(v) || unit is null || RunText.Unit(unit, out ConcentrationUnit u) is string)
             {
-                throw new JsonException("A concentration needs a number \"value\" and a known \"unit\" (e.g. µg/L).");
+                throw new JsonException("A concentration needs a finite number \"value\" and a known \"unit\" (e.g. µg/L).");
             }
 
-            return Concentration.From(value.Value, u);
+            try
+            {
+                return Concentration.From(v, u);
+            }
+            catch (ArgumentException ex)
+            {
+                throw new JsonException("Not a concentration: " + ex.Message, ex);
+            }
         }
 
         public override void Write(Utf8JsonWriter writer, Concentration value, JsonSerializerOptions options)
@@ -136,6 +215,24 @@ public static class RunResultsJson
             writer.WriteString("unit", Concentration.SymbolOf(value.Unit));
             writer.WriteEndObject();
         }
+    }
+
+    /// <summary>Numbers as System.Text.Json reads them, except that out-of-range numbers (1e400 reads as infinity) are
+    /// refused: the library never returns ∞ silently.</summary>
+    private sealed class FiniteDoubleConverter : JsonConverter<double>
+    {
+        public override double Read(ref Utf8JsonReader reader, Type typeToConvert, JsonSerializerOptions options)
+        {
+            if (reader.TokenType != JsonTokenType.Number)
+            {
+                throw new JsonException("Expected a number.");
+            }
+
+            double v = reader.GetDouble();
+            return double.IsNaN(v) || double.IsInfinity(v) ? throw new JsonException("A number must be finite; found one out of the range of a double.") : v;
+        }
+
+        public override void Write(Utf8JsonWriter writer, double value, JsonSerializerOptions options) => writer.WriteNumberValue(value);
     }
 
     private sealed class RoleConverter : JsonConverter<InjectionRole>

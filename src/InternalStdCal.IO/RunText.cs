@@ -25,6 +25,9 @@ internal static class RunText
         (InjectionRole.SpikedSample, "spike"),
     };
 
+    /// <summary>Drops a byte order mark decoded into the text (a StreamReader drops it itself; other readers may not).</summary>
+    internal static string WithoutByteOrderMark(string text) => text.Length > 0 && text[0] == '\uFEFF' ? text.Substring(1) : text;
+
     internal static string RoleList => string.Join(", ", Roles.Select(r => r.Token));
 
     internal static string Token(InjectionRole role) => Roles.First(r => r.Role == role).Token;
