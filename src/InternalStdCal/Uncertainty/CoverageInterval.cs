@@ -53,7 +53,10 @@ public readonly struct CoverageInterval : IEquatable<CoverageInterval>
 
     /// <summary>Prints e.g. "[9.8, 10.2] (95 %)" (invariant culture).</summary>
     /// <returns>The text.</returns>
-    public override string ToString() =>
-        "[" + Lower.ToString("G6", CultureInfo.InvariantCulture) + ", " + Upper.ToString("G6", CultureInfo.InvariantCulture) + "] ("
-        + (100 * Probability).ToString("G4", CultureInfo.InvariantCulture) + " %)";
+    public override string ToString() => ToString(string.Empty);
+
+    /// <summary>Prints "[lower, upper] unit (p %)"; an empty unit prints as <see cref="ToString()"/>.</summary>
+    internal string ToString(string unit) =>
+        "[" + Lower.ToString("G6", CultureInfo.InvariantCulture) + ", " + Upper.ToString("G6", CultureInfo.InvariantCulture) + "]"
+        + (unit.Length > 0 ? " " + unit : string.Empty) + " (" + (100 * Probability).ToString("G4", CultureInfo.InvariantCulture) + " %)";
 }

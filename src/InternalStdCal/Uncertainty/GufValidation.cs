@@ -11,8 +11,11 @@ namespace InternalStdCal.Uncertainty;
 /// lab's validated method and QA system.</remarks>
 public sealed class GufValidation
 {
-    internal GufValidation(CoverageInterval gum, CoverageInterval monteCarlo, double tolerance, int digits)
+    private readonly string _unit;
+
+    internal GufValidation(CoverageInterval gum, CoverageInterval monteCarlo, double tolerance, int digits, string unit)
     {
+        _unit = unit;
         GumInterval = gum;
         MonteCarloInterval = monteCarlo;
         Tolerance = tolerance;
@@ -40,12 +43,15 @@ public sealed class GufValidation
     /// <summary>True when both differences are ≤ δ.</summary>
     public bool IsValidated => LowerDifference <= Tolerance && UpperDifference <= Tolerance;
 
-    /// <summary>Prints the verdict with its numbers (invariant culture).</summary>
+    /// <summary>Prints the verdict with its numbers in the output unit (invariant culture).</summary>
     /// <returns>The text.</returns>
-    public override string ToString() =>
-        (IsValidated ? "GUF validated" : "GUF NOT validated") + " (JCGM 101:2008 §8): d_low = " + G(LowerDifference)
-        + ", d_high = " + G(UpperDifference) + ", δ = " + G(Tolerance) + " (" + SignificantDigits.ToString(CultureInfo.InvariantCulture)
-        + " significant digits); GUM " + GumInterval + ", Monte Carlo " + MonteCarloInterval;
+    public override string ToString()
+    {
+        string unit = _unit.Length > 0 ? " " + _unit : string.Empty;
+        return (IsValidated ? "GUF validated" : "GUF NOT validated") + " (JCGM 101:2008 §8): d_low = " + G(LowerDifference) + unit
+            + ", d_high = " + G(UpperDifference) + unit + ", δ = " + G(Tolerance) + unit + " (" + SignificantDigits.ToString(CultureInfo.InvariantCulture)
+            + " significant digits); GUM " + GumInterval.ToString(_unit) + ", Monte Carlo " + MonteCarloInterval.ToString(_unit);
+    }
 
     private static string G(double x) => x.ToString("G4", CultureInfo.InvariantCulture);
 }
