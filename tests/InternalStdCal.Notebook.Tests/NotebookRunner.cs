@@ -48,6 +48,9 @@ internal sealed class NotebookRunner : IDisposable
 
     private static readonly Regex ReferenceLine = new(@"^(?<indent>[ \t]*)#r[ \t]+""(?<target>[^""]+)""[ \t]*$", RegexOptions.Multiline);
 
+    // Packages whose assembly is named otherwise than the package.
+    private static readonly Dictionary<string, string> AssemblyOfPackage = new(StringComparer.OrdinalIgnoreCase) { ["OxyPlot.Core"] = "OxyPlot" };
+
     private readonly CompositeKernel _kernel;
 
     private NotebookRunner(InteractiveDocument document, CompositeKernel kernel, IReadOnlyList<CellRun> cells)
@@ -73,7 +76,7 @@ internal sealed class NotebookRunner : IDisposable
 
     /// <summary>
     /// Points every <c>#r</c> of a cell at the DLLs beside this test assembly, which the build has just produced:
-    /// <c>#r "nuget: Name, version"</c> becomes <c>#r "&lt;test bin&gt;/Name.dll"</c> and <c>#r "…/X.dll"</c> becomes
+    /// <c>#r "nuget: Name, version"</c> becomes <c>#r "&lt;test bin&gt;/Name.dll"</c> (OxyPlot.Core: OxyPlot.dll) and <c>#r "…/X.dll"</c> becomes
     /// <c>#r "&lt;test bin&gt;/X.dll"</c>. So the test needs no package restore inside the kernel and always runs the
     /// library of the current build, whatever configuration it was built in.
     /// </summary>
@@ -81,9 +84,13 @@ internal sealed class NotebookRunner : IDisposable
     public static string UseBuiltReferences(string code) => ReferenceLine.Replace(code, m =>
     {
         string target = m.Groups["target"].Value;
-        string file = target.StartsWith("nuget:", StringComparison.Ordinal)
-            ? target.Substring("nuget:".Length).Split(',')[0].Trim() + ".dll"
-            : Path.GetFileName(target);
+        string file = Path.GetFileName(target);
+        if (target.StartsWith("nuget:", StringComparison.Ordinal))
+        {
+            string package = target.Substring("nuget:".Length).Split(',')[0].Trim();
+            file = (AssemblyOfPackage.TryGetValue(package, out string? assembly) ? assembly : package) + ".dll";
+        }
+
         string local = Path.Combine(AppContext.BaseDirectory, file);
         if (!File.Exists(local))
         {

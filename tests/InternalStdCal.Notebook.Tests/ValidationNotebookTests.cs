@@ -35,15 +35,37 @@ public class ValidationNotebookTests : IClassFixture<NotebookFixture>
     {
         var references = NotebookRunner.References(_fixture.Run.Document);
         string folder = Path.GetDirectoryName(NotebookFixture.NotebookPath)!;
-        string library = references.Single(r => r.EndsWith("InternalStdCal.dll", StringComparison.Ordinal));
-        Assert.Equal(
-            Path.Combine(NotebookFixture.RepositoryRoot, "src", "InternalStdCal", "bin", "Release", "net8.0", "InternalStdCal.dll"),
-            Path.GetFullPath(Path.Combine(folder, library)));
+        foreach (string project in new[] { "InternalStdCal", "InternalStdCal.Reporting" })
+        {
+            string library = references.Single(r => r.EndsWith("/" + project + ".dll", StringComparison.Ordinal));
+            Assert.Equal(
+                Path.Combine(NotebookFixture.RepositoryRoot, "src", project, "bin", "Release", "net8.0", project + ".dll"),
+                Path.GetFullPath(Path.Combine(folder, library)));
+        }
 
-        // The NuGet reference must name the version the library is built with (Directory.Packages.props).
+        // The NuGet references must name the versions the libraries are built with (Directory.Packages.props).
         string props = File.ReadAllText(Path.Combine(NotebookFixture.RepositoryRoot, "Directory.Packages.props"));
-        string mathNet = Regex.Match(props, @"Include=""MathNet.Numerics"" Version=""(?<v>[^""]+)""").Groups["v"].Value;
-        Assert.Contains($"nuget: MathNet.Numerics, {mathNet}", references);
+        foreach (string package in new[] { "MathNet.Numerics", "OxyPlot.Core" })
+        {
+            string version = Regex.Match(props, $@"Include=""{Regex.Escape(package)}"" Version=""(?<v>[^""]+)""").Groups["v"].Value;
+            Assert.Contains($"nuget: {package}, {version}", references);
+        }
+    }
+
+    [Fact]
+    public void PlotCells_ShowSvgImages()
+    {
+        // Curve + residuals, then the %RE plots of the weighted and the unweighted line.
+        foreach ((string code, int plots) in new[] { ("CalibrationPlots.Curve(", 2), ("CalibrationPlots.RelativeErrors(", 2) })
+        {
+            CellRun cell = Cell(code);
+            string[] svgs = cell.Outputs.OfType<Microsoft.DotNet.Interactive.Documents.DisplayElement>()
+                .Where(d => d.Data.ContainsKey("image/svg+xml"))
+                .Select(d => d.Data["image/svg+xml"].ToString()!)
+                .ToArray();
+            Assert.Equal(plots, svgs.Length);
+            Assert.All(svgs, svg => Assert.Contains("<svg", svg, StringComparison.Ordinal));
+        }
     }
 
     [Fact]
@@ -108,11 +130,10 @@ public class ValidationNotebookTests : IClassFixture<NotebookFixture>
     private static void AssertRelative(double expected, double actual, double tolerance) =>
         Assert.True(Math.Abs(actual - expected) <= tolerance * Math.Abs(expected), $"expected {expected:R}, notebook shows {actual:R}");
 
-    private string CellOutput(string codeFragment)
-    {
-        CellRun cell = _fixture.Run.Cells.Single(c => _fixture.Run.Document.Elements[c.Index].Contents.Contains(codeFragment, StringComparison.Ordinal));
-        return cell.Text;
-    }
+    private string CellOutput(string codeFragment) => Cell(codeFragment).Text;
+
+    private CellRun Cell(string codeFragment) =>
+        _fixture.Run.Cells.Single(c => _fixture.Run.Document.Elements[c.Index].Contents.Contains(codeFragment, StringComparison.Ordinal));
 
     // Weighted least squares y = a + b·x with w = 1/x², closed form (weighted means and centred sums).
     private (double A, double B) InverseXSquaredLine()
