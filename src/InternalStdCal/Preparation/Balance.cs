@@ -1,4 +1,5 @@
 using System;
+using System.Globalization;
 using InternalStdCal.Internal;
 using InternalStdCal.Quantities;
 
@@ -62,4 +63,15 @@ public sealed class Balance
         Guard.PositiveQuantity(netMass, nameof(netMass), "a mass");
         return Measured.WithStandardUncertainty(netMass, SingleReadingStandardUncertainty.Scale(Math.Sqrt(2)), null, UncertaintyEvaluation.Combined);
     }
+
+    /// <summary>Prints e.g. "Balance: linearity ±0.2 mg, repeatability s_r = 0.1 mg, readability 0.1 mg; one reading
+    /// u = 0.1443 mg" (invariant culture; the u of one reading in the unit of the readability, 4 significant digits).</summary>
+    /// <returns>The text.</returns>
+    public override string ToString() => string.Format(
+        CultureInfo.InvariantCulture,
+        "Balance: linearity ±{0}, repeatability s_r = {1}, readability {2}; one reading u = {3}",
+        LinearityLimit,
+        RepeatabilityStandardDeviation,
+        Readability,
+        SingleReadingStandardUncertainty.ConvertTo(Readability.Unit).ToString("G4", CultureInfo.InvariantCulture));
 }

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Globalization;
 using System.Linq;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
@@ -79,4 +80,16 @@ public sealed class UnknownSample
 
     /// <summary>Mean response ratio analyte/IS of the injections.</summary>
     public double MeanResponse => _injections.Average(i => i.Ratio);
+
+    /// <summary>Prints e.g. "RF-19: 2 injections, mean ratio 0.010171, IS 10 µg/L" (invariant culture, ratio to 6
+    /// significant digits).</summary>
+    /// <returns>The text.</returns>
+    public override string ToString() => string.Format(
+        CultureInfo.InvariantCulture,
+        "{0}: {1} injection{2}, mean ratio {3:G6}, IS {4}",
+        Label,
+        _injections.Length,
+        _injections.Length == 1 ? string.Empty : "s",
+        MeanResponse,
+        InternalStandardConcentration);
 }

@@ -40,12 +40,15 @@ public sealed class GufValidation
     /// <summary>True when both differences are ≤ δ.</summary>
     public bool IsValidated => LowerDifference <= Tolerance && UpperDifference <= Tolerance;
 
-    /// <summary>Prints the verdict with its numbers (invariant culture).</summary>
+    /// <summary>Prints the verdict with its numbers in the output unit (invariant culture).</summary>
     /// <returns>The text.</returns>
-    public override string ToString() =>
-        (IsValidated ? "GUF validated" : "GUF NOT validated") + " (JCGM 101:2008 §8): d_low = " + G(LowerDifference)
-        + ", d_high = " + G(UpperDifference) + ", δ = " + G(Tolerance) + " (" + SignificantDigits.ToString(CultureInfo.InvariantCulture)
-        + " significant digits); GUM " + GumInterval + ", Monte Carlo " + MonteCarloInterval;
+    public override string ToString()
+    {
+        string unit = GumInterval.Unit.Length > 0 ? " " + GumInterval.Unit : string.Empty;
+        return (IsValidated ? "GUF validated" : "GUF NOT validated") + " (JCGM 101:2008 §8): d_low = " + G(LowerDifference) + unit
+            + ", d_high = " + G(UpperDifference) + unit + ", δ = " + G(Tolerance) + unit + " (" + SignificantDigits.ToString(CultureInfo.InvariantCulture)
+            + " significant digits); GUM " + GumInterval + ", Monte Carlo " + MonteCarloInterval;
+    }
 
     private static string G(double x) => x.ToString("G4", CultureInfo.InvariantCulture);
 }

@@ -132,7 +132,7 @@ public sealed class MonteCarloEvaluation
         string unit = Model.OutputUnit.Length > 0 ? " " + Model.OutputUnit : string.Empty;
         var text = new StringBuilder();
         text.Append(Model.OutputName).Append(" = ").Append(G(Value)).Append(unit).Append(", u = ").Append(G(StandardUncertainty)).Append(unit)
-            .Append("; symmetric ").Append(SymmetricInterval).Append(", shortest ").Append(ShortestInterval)
+            .Append("; symmetric ").Append(SymmetricInterval.ToString()).Append(", shortest ").Append(ShortestInterval.ToString())
             .Append("; Monte Carlo (JCGM 101:2008), M = ").Append(Trials.ToString(CultureInfo.InvariantCulture))
             .Append(", seed ").Append(Seed.ToString(CultureInfo.InvariantCulture));
         if (IsAdaptive)

@@ -22,6 +22,15 @@ public class BalanceTests
     }
 
     [Fact]
+    public void ToString_NamesFiguresAndSingleReadingUncertaintyWithUnits()
+    {
+        // u of one reading from the formula above: √(0.04/3 + 0.0025 + 0.01/12) mg = 0.1291 mg (4 significant digits).
+        Assert.Equal(
+            "Balance: linearity ±0.2 mg, repeatability s_r = 0.05 mg, readability 0.1 mg; one reading u = 0.1291 mg",
+            Analytical.ToString());
+    }
+
+    [Fact]
     public void WeighByDifference_TwoReadings()
     {
         // Gross and tare are independent readings: every term twice (common practice).

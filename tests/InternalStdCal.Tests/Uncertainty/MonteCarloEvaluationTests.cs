@@ -134,6 +134,24 @@ public class MonteCarloEvaluationTests
     }
 
     [Fact]
+    public void ToString_WithOutputUnit_PrintsUnitAfterEveryIntervalAndDifference()
+    {
+        MeasurementModel model = MeasurementModel.Create("y", "mg/kg", new[] { UncertainInput.Rectangular("x", 0, 1) }, x => x[0]);
+        MonteCarloEvaluation mc = model.EvaluateMonteCarlo(10_000, 3);
+        Assert.Matches(@"symmetric \[[^\]]+\] mg/kg \(95 %\), shortest \[[^\]]+\] mg/kg \(95 %\)", mc.ToString());
+        string validation = mc.ValidateGum(model.EvaluateGum()).ToString();
+        Assert.Matches(@"d_low = \S+ mg/kg, d_high = \S+ mg/kg, δ = \S+ mg/kg", validation);
+        Assert.Matches(@"GUM \[[^\]]+\] mg/kg \(95 %\), Monte Carlo \[[^\]]+\] mg/kg \(95 %\)$", validation);
+    }
+
+    [Fact]
+    public void ToString_WithoutOutputUnit_PrintsBareIntervals()
+    {
+        MonteCarloEvaluation mc = Sum(UncertainInput.Rectangular("x", 0, 1)).EvaluateMonteCarlo(10_000, 3);
+        Assert.Matches(@"symmetric \[[^\]]+\] \(95 %\), shortest \[[^\]]+\] \(95 %\)", mc.ToString());
+    }
+
+    [Fact]
     public void EvaluateMonteCarloAdaptive_OneRectangular_HalfWidthWithinTolerance()
     {
         MonteCarloEvaluation mc = Sum(UncertainInput.Rectangular("x", 0, 1)).EvaluateMonteCarloAdaptive(10, significantDigits: 2);
