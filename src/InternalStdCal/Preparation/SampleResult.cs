@@ -92,7 +92,7 @@ public sealed class SampleResult
         Guard.PositiveQuantity(sampleMass.Value, nameof(sampleMass), "a mass");
         Guard.NotNull(dilutions, nameof(dilutions));
         PreparedSolution.RequireKind(resultUnit, ConcentrationKind.MassFraction, "the result refers to the mass of sample", nameof(resultUnit));
-        double litresPerKilogram = digestVolume.Value.Litres / sampleMass.Value.Kilograms;
+        double litresPerKilogram = Guard.FiniteResult(digestVolume.Value.Litres / sampleMass.Value.Kilograms, sampleMass.Value, nameof(sampleMass), "V_digest/m_sample");
         var terms = new List<BudgetTerm>
         {
             BudgetTerm.Of(SampleStage, "digest volume", digestVolume, +1),

@@ -108,12 +108,20 @@ public static class VolumetricEquipment
     /// (<see cref="WaterExpansionCoefficientPerKelvin"/> for dilute aqueous solutions; the glass's own expansion is
     /// much smaller and neglected, as in QUAM).</param>
     /// <returns>The standard uncertainty, in the unit of <paramref name="volume"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">A number is negative, NaN or ±∞.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A number is negative, NaN or ±∞, or V·α·ΔT overflows.</exception>
     public static Volume TemperatureEffect(Volume volume, double temperatureHalfRangeKelvin, double expansionCoefficientPerKelvin)
     {
         Guard.NonNegative(temperatureHalfRangeKelvin, nameof(temperatureHalfRangeKelvin));
         Guard.NonNegative(expansionCoefficientPerKelvin, nameof(expansionCoefficientPerKelvin));
-        return volume.Scale(expansionCoefficientPerKelvin * temperatureHalfRangeKelvin / Tolerances.RootThree);
+        try
+        {
+            return volume.Scale(expansionCoefficientPerKelvin * temperatureHalfRangeKelvin / Tolerances.RootThree);
+        }
+        catch (ArgumentOutOfRangeException)
+        {
+            // u must be a finite volume (common practice: never return ∞ silently).
+            throw Guard.OutOfRange(nameof(temperatureHalfRangeKelvin), temperatureHalfRangeKelvin, $"small enough that V·α·ΔT/√3 stays finite (V = {volume}, α = {Guard.Format(expansionCoefficientPerKelvin)} 1/K)");
+        }
     }
 
     /// <summary>
