@@ -87,14 +87,14 @@ public static class VolumetricEquipment
     /// <param name="randomErrorStandardDeviation">Random error (repeatability) as a standard deviation at this volume, ≥ 0.</param>
     /// <param name="distribution">Distribution assumed for the systematic error.</param>
     /// <returns>The volume with its combined standard uncertainty, in the unit of <paramref name="setVolume"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="setVolume"/> is 0, or
-    /// <paramref name="distribution"/> is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="setVolume"/> is 0,
+    /// <paramref name="distribution"/> is not defined, or a component overflows in the unit of the set volume.</exception>
     public static Measured<Volume> AdjustablePipette(Volume setVolume, Volume systematicErrorLimit, Volume randomErrorStandardDeviation, ToleranceDistribution distribution)
     {
         Guard.PositiveQuantity(setVolume, nameof(setVolume), "a volume");
         (double divisor, _) = Tolerances.Divisor(distribution, nameof(distribution));
-        double systematic = systematicErrorLimit.In(setVolume.Unit) / divisor;
-        double random = randomErrorStandardDeviation.In(setVolume.Unit);
+        double systematic = In(systematicErrorLimit, setVolume.Unit, nameof(systematicErrorLimit)) / divisor;
+        double random = In(randomErrorStandardDeviation, setVolume.Unit, nameof(randomErrorStandardDeviation));
         return Combined(setVolume, new[] { systematic, random });
     }
 
@@ -175,4 +175,8 @@ public static class VolumetricEquipment
 
     private static System.Collections.ObjectModel.ReadOnlyCollection<Volume> Sizes((double Nominal, double Tolerance)[] table) =>
         Array.AsReadOnly(table.Select(t => Volume.FromMillilitres(t.Nominal)).ToArray());
+
+    // Volume.In that names the caller's parameter when the value overflows in the set volume's unit.
+    private static double In(Volume volume, VolumeUnit unit, string paramName) =>
+        PowerOfTen.ScaleChecked(volume.Value, UnitTable.Exponent(volume.Unit) - UnitTable.Exponent(unit), UnitTable.Symbol(volume.Unit), UnitTable.Symbol(unit), paramName);
 }

@@ -165,7 +165,7 @@ internal static class BadInput
         {
             if (key.StartsWith(id + "(", StringComparison.Ordinal) || key.StartsWith(id + "``", StringComparison.Ordinal))
             {
-                result.UnionWith(names);
+                result.UnionWith(names.Where(n => n != InheritDoc));
             }
         }
 
