@@ -731,7 +731,6 @@ public sealed class RegressionFit
     /// parabola): the standard error is unbounded.</exception>
     public InverseEstimate EstimateInverse(double meanResponse, int replicates = 1, double confidenceLevel = 0.95, double? unknownWeight = null)
     {
-        Guard.Finite(meanResponse, nameof(meanResponse));
         double x0 = InverseEvaluate(meanResponse);
         Guard.AtLeast(replicates, 1, nameof(replicates));
         double t = TwoSidedT(confidenceLevel);
@@ -786,7 +785,6 @@ public sealed class RegressionFit
             throw new InvalidOperationException("Fieller's interval is implemented for the straight-line models only; use InversePredict for the quadratic.");
         }
 
-        Guard.Finite(meanResponse, nameof(meanResponse));
         double x0 = InverseEvaluate(meanResponse);
         Guard.AtLeast(replicates, 1, nameof(replicates));
         double t = TwoSidedT(confidenceLevel);

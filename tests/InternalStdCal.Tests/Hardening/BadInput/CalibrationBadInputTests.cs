@@ -103,13 +103,13 @@ public class CalibrationBadInputTests
         new("Calibration.RegressionFit.PredictionInterval", "level NaN", () => Line.PredictionInterval(1, 1, double.NaN), Range, "confidenceLevel", "NaN", "(0, 1)"),
         new("Calibration.RegressionFit.InverseEvaluate", "NaN", () => Line.InverseEvaluate(double.NaN), Range, "response", "NaN", Finite),
         new("Calibration.RegressionFit.InverseEvaluate", "below the parabola's vertex", () => Parabola.InverseEvaluate(-1e6), Range, "response", "-1000000", "never reaches it"),
-        new("Calibration.RegressionFit.InversePredict", "NaN", () => Line.InversePredict(double.NaN), Range, "meanResponse", "NaN", Finite),
+        new("Calibration.RegressionFit.InversePredict", "NaN", () => Line.InversePredict(double.NaN), Range, "response", "NaN", Finite), // names the response (pinned by RegressionFitTests)
         new("Calibration.RegressionFit.InversePredict", "0 replicates", () => Line.InversePredict(1, 0), Range, "replicates", "0", ">= 1"),
         new("Calibration.RegressionFit.InversePredict", "level 1", () => Line.InversePredict(1, 1, 1), Range, "confidenceLevel", "1", "(0, 1)"),
-        new("Calibration.RegressionFit.EstimateInverse", "+inf", () => Line.EstimateInverse(double.PositiveInfinity), Range, "meanResponse", "Infinity", Finite),
+        new("Calibration.RegressionFit.EstimateInverse", "+inf", () => Line.EstimateInverse(double.PositiveInfinity), Range, "response", "Infinity", Finite), // names the response (pinned by RegressionFitTests)
         new("Calibration.RegressionFit.EstimateInverse", "level -0.5", () => Line.EstimateInverse(1, 1, -0.5), Range, "confidenceLevel", "-0.5", "(0, 1)"),
         new("Calibration.RegressionFit.EstimateInverse", "unknown weight 0", () => Line.EstimateInverse(1, 1, 0.95, 0), Range, "unknownWeight", "0", FinitePositive),
-        new("Calibration.RegressionFit.FiellerInterval", "NaN", () => Line.FiellerInterval(double.NaN), Range, "meanResponse", "NaN", Finite),
+        new("Calibration.RegressionFit.FiellerInterval", "NaN", () => Line.FiellerInterval(double.NaN), Range, "response", "NaN", Finite), // names the response (pinned by RegressionFitTests)
         new("Calibration.RegressionFit.FiellerInterval", "-3 replicates", () => Line.FiellerInterval(1, -3), Range, "replicates", "-3", ">= 1"),
         new("Calibration.RegressionFit.FiellerInterval", "quadratic", () => Parabola.FiellerInterval(1), Invalid, null, "straight-line models only"),
         new("Calibration.RegressionCalibration.Fit", "empty", () => RegressionCalibration.Fit(Array.Empty<CalibrationStandard>(), CalibrationModel.Linear), Arg, "standards", "empty"),
