@@ -81,7 +81,7 @@ public static class IchLimits
     private static IchLimitResult Create(ResponseSigma sigma, double slope, double axisFactor, ConcentrationUnit unit, double kd, double kq, string slopeText)
     {
         double perSlope = sigma.Value / slope * axisFactor;
-        Guard.FiniteResult(kq * perSlope, sigma.Value, nameof(sigma), "k_Q·σ/S"); // a number > 1.8e308 is no limit (common practice)
+        Guard.FiniteResult(kq * perSlope, sigma.Value, nameof(sigma), "k_Q·σ/S"); // LOD and LOQ must be finite (common practice)
         bool ich = kd == DefaultDetectionFactor && kq == DefaultQuantificationFactor;
         string formula = "LOD = " + Text.G(kd) + "·σ/S, LOQ = " + Text.G(kq) + "·σ/S; " + sigma + "; " + slopeText;
         string source = ich
