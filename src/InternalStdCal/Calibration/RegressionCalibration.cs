@@ -105,6 +105,7 @@ public sealed class RegressionCalibration : RatioCalibration
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="model"/> is not defined.</exception>
     /// <exception cref="ArgumentException">Bad standards (see <see cref="ResponseFactorCalibration.Fit"/>); too few
     /// points or levels for the model; the weighting is undefined at a point or has the wrong number of values.</exception>
+    /// <exception cref="InvalidOperationException">A back-calculated interval of a standard overflows (absurd magnitudes).</exception>
     public static RegressionCalibration Fit(IReadOnlyList<CalibrationStandard> standards, CalibrationModel model, Weighting? weighting = null, CalibrationOptions? options = null)
     {
         StandardSet set = StandardSet.Create(standards, options);

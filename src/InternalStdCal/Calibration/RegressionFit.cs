@@ -553,11 +553,12 @@ public sealed class RegressionFit
     /// <summary>Fitted response ŷ at <paramref name="x"/> (y units).</summary>
     /// <param name="x">Concentration (x units); finite.</param>
     /// <returns>ŷ = a + b·x + c·x².</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="x"/> is not finite.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="x"/> is not finite, or ŷ overflows.</exception>
     public double Predict(double x)
     {
         Guard.Finite(x, nameof(x));
-        return -CompensatedResidual(x, 0);
+        double y = -CompensatedResidual(x, 0);
+        return double.IsNaN(y) || double.IsInfinity(y) ? throw Guard.OutOfRange(nameof(x), x, "small enough in magnitude that the fitted response is finite") : y;
     }
 
     /// <summary>Sensitivity dy/dx = b + 2c·x at <paramref name="x"/> (y units per x unit; ISO 8466-2's E(x)).</summary>
@@ -586,6 +587,7 @@ public sealed class RegressionFit
     /// <returns>The interval (coefficient units).</returns>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="index"/> outside [0, ParameterCount) or
     /// <paramref name="confidenceLevel"/> outside (0, 1).</exception>
+    /// <exception cref="InvalidOperationException">A bound overflows.</exception>
     public ConfidenceInterval CoefficientInterval(int index, double confidenceLevel = 0.95)
     {
         CheckIndex(index, nameof(index));
@@ -602,6 +604,7 @@ public sealed class RegressionFit
     /// <returns>The interval (y units).</returns>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="x"/> not finite or
     /// <paramref name="confidenceLevel"/> outside (0, 1).</exception>
+    /// <exception cref="InvalidOperationException">A bound overflows.</exception>
     public ConfidenceInterval MeanResponseInterval(double x, double confidenceLevel = 0.95)
     {
         double t = TwoSidedT(confidenceLevel);
@@ -624,6 +627,7 @@ public sealed class RegressionFit
     /// (0, 1), or unknownWeight not finite and &gt; 0.</exception>
     /// <exception cref="ArgumentException"><paramref name="unknownWeight"/> is null but the weighting is per-point
     /// or undefined at x / ŷ(x).</exception>
+    /// <exception cref="InvalidOperationException">A bound overflows.</exception>
     public ConfidenceInterval PredictionInterval(double x, int replicates = 1, double confidenceLevel = 0.95, double? unknownWeight = null)
     {
         double yHat = Predict(x);
@@ -797,7 +801,7 @@ public sealed class RegressionFit
         double k = (1.0 / (replicates * w0)) + (Model == CalibrationModel.Linear ? 1.0 / Count : 0.0);
         double d = x0 - _center;
         double root = (t * s / b) * Math.Sqrt(((1 - g) * k) + (d * d / sxx));
-        return new ConfidenceInterval(_center + ((d - root) / (1 - g)), _center + ((d + root) / (1 - g)), confidenceLevel);
+        return new ConfidenceInterval(Bound(_center + ((d - root) / (1 - g))), Bound(_center + ((d + root) / (1 - g))), confidenceLevel);
     }
 
     /// <summary>
@@ -1029,6 +1033,7 @@ public sealed class RegressionFit
     {
         if (confidenceLevel != 0.95)
         {
+            Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
             return StudentTQuantile.TwoSided(confidenceLevel, DegreesOfFreedom);
         }
 
@@ -1224,7 +1229,13 @@ public sealed class RegressionFit
     }
 
     private static ConfidenceInterval Symmetric(double center, double halfWidth, double confidenceLevel) =>
-        new(center - halfWidth, center + halfWidth, confidenceLevel);
+        new(Bound(center - halfWidth), Bound(center + halfWidth), confidenceLevel);
+
+    // An interval bound that overflows is refused, never returned as ∞ (common practice).
+    private static double Bound(double value) =>
+        double.IsNaN(value) || double.IsInfinity(value)
+            ? throw new InvalidOperationException("An interval bound overflows the range of a double; the value is too far from the calibration for an interval.")
+            : value;
 
     /// <summary>Σw·v/Σw with one correction pass (weights sum to n).</summary>
     private static double WeightedMean(double[] values, double[] weights)

@@ -115,8 +115,17 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// <returns>The calibration (<see cref="RatioModel.SinglePointResponseFactor"/>).</returns>
     /// <exception cref="ArgumentNullException"><paramref name="standard"/> is null.</exception>
     /// <exception cref="ArgumentException">The standard is a blank or its RF is ≤ 0.</exception>
-    public static ResponseFactorCalibration FitSinglePoint(CalibrationStandard standard, CalibrationOptions? options = null) =>
-        Fit(new[] { Guard.NotNull(standard, nameof(standard)) }, options);
+    public static ResponseFactorCalibration FitSinglePoint(CalibrationStandard standard, CalibrationOptions? options = null)
+    {
+        try
+        {
+            return Fit(new[] { Guard.NotNull(standard, nameof(standard)) }, options);
+        }
+        catch (ArgumentException e) when (e.ParamName == "standards")
+        {
+            throw new ArgumentException(e.Message.Replace("Parameter 'standards'", "Parameter 'standard'"), nameof(standard), e);
+        }
+    }
 
     /// <summary>Relative standard uncertainty of a result under a constant-relative-error model: the RFs of the
     /// standards scatter with relative SD s_rel, the mean RF of n has s_rel/√n, and the mean of m sample ratios

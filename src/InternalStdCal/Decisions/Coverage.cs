@@ -36,8 +36,19 @@ public sealed class Coverage : IEquatable<Coverage>
     /// <summary>A coverage probability (level of confidence), e.g. 0.95; k follows from the normal or t distribution.</summary>
     /// <param name="probability">p in (0, 1).</param>
     /// <returns>The coverage.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="probability"/> outside (0, 1).</exception>
-    public static Coverage WithProbability(double probability) => new(null, Guard.InOpenRange(probability, 0, 1, nameof(probability)));
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="probability"/> outside (0, 1), or so close to 1
+    /// that (1 + p)/2 rounds to 1.</exception>
+    public static Coverage WithProbability(double probability)
+    {
+        Guard.InOpenRange(probability, 0, 1, nameof(probability));
+        if ((1 + probability) / 2 == 1)
+        {
+            // The two-sided quantile of (1 + p)/2 = 1 is infinite (common practice: never return ∞ silently).
+            throw Guard.OutOfRange(nameof(probability), probability, "a number in (0, 1) with (1 + p)/2 below 1 in double precision (p <= 1 − 2.3E-16)");
+        }
+
+        return new(null, probability);
+    }
 
     /// <summary>The coverage factor for a standard uncertainty with the given degrees of freedom.</summary>
     /// <param name="degreesOfFreedom">ν ≥ 1 (rounded down), or null for a normal distribution.</param>
@@ -45,14 +56,15 @@ public sealed class Coverage : IEquatable<Coverage>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="degreesOfFreedom"/> &lt; 1 or not finite.</exception>
     public double FactorFor(double? degreesOfFreedom)
     {
+        int? whole = degreesOfFreedom is double nu ? DecisionMath.WholeDegreesOfFreedom(nu, nameof(degreesOfFreedom)) : null;
         if (Factor is double k)
         {
             return k;
         }
 
         double p = (1 + Probability!.Value) / 2;
-        return degreesOfFreedom is double nu
-            ? StudentTQuantile.OneSided(p, DecisionMath.WholeDegreesOfFreedom(nu, nameof(degreesOfFreedom)))
+        return whole is int df
+            ? StudentTQuantile.OneSided(p, df)
             : MathNet.Numerics.Distributions.Normal.InvCDF(0, 1, p);
     }
 

@@ -274,6 +274,11 @@ public sealed class DecisionRule : IEquatable<DecisionRule>
         }
 
         double w = factor is double f ? f * e.StandardUncertainty : 0;
+        if (double.IsInfinity(w))
+        {
+            // The guard band must be a finite concentration (common practice: never ∞ silently).
+            throw new ArgumentOutOfRangeException(paramName, FormattableString.Invariant($"Parameter '{paramName}' has u = {Guard.Format(e.StandardUncertainty)}; the guard band {Guard.Format(factor!.Value)}·u of the rule '{Name}' overflows, so u must be smaller."));
+        }
         return ComplianceDecision.Create(this, limit, e, w, factor, coverageFactor);
     }
 

@@ -85,6 +85,31 @@ internal static class Guard
         return value;
     }
 
+    /// <summary>A scale factor whose product with a number of this magnitude (the larger of the quantity's number
+    /// in its own unit and in the base unit) stays finite; call after the factor's own range check.</summary>
+    internal static double FiniteProduct(double factor, double magnitude, string paramName)
+    {
+        if (double.IsInfinity(factor * magnitude))
+        {
+            throw OutOfRange(paramName, factor, $"a factor whose product with {Format(magnitude)} stays finite (at most {Format(double.MaxValue / magnitude)} in magnitude)");
+        }
+
+        return factor;
+    }
+
+    /// <summary>A computed number that overflowed names the argument that drives it (common practice: never
+    /// return NaN or ∞ silently).</summary>
+    internal static double FiniteResult<T>(double result, T argument, string paramName, string what)
+        where T : IFormattable
+    {
+        if (double.IsNaN(result) || double.IsInfinity(result))
+        {
+            throw new ArgumentOutOfRangeException(paramName, $"Parameter '{paramName}' was {argument.ToString(null, CultureInfo.InvariantCulture)}; it must keep {what} finite (it overflows).");
+        }
+
+        return result;
+    }
+
     internal static int AtLeast(int value, int min, string paramName)
     {
         if (value < min)

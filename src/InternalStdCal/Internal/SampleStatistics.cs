@@ -34,8 +34,35 @@ internal static class SampleStatistics
     }
 
     /// <summary>Sample standard deviation s (n − 1 in the denominator) of at least two values about <paramref name="mean"/>.</summary>
-    internal static double StandardDeviation(IReadOnlyList<double> values, double mean) =>
-        Math.Sqrt(CentredSumOfSquares(values, mean) / (values.Count - 1));
+    internal static double StandardDeviation(IReadOnlyList<double> values, double mean)
+    {
+        double s = Math.Sqrt(CentredSumOfSquares(values, mean) / (values.Count - 1));
+        return double.IsNaN(s) || double.IsInfinity(s) ? ScaledStandardDeviation(values, mean) : s;
+    }
+
+    // Deviations scaled by the largest one, so that squares of huge values do not overflow (common practice).
+    private static double ScaledStandardDeviation(IReadOnlyList<double> values, double mean)
+    {
+        double max = 0;
+        for (int i = 0; i < values.Count; i++)
+        {
+            max = Math.Max(max, Math.Abs(values[i] - mean));
+        }
+
+        if (max == 0 || double.IsInfinity(max))
+        {
+            return max;
+        }
+
+        var sum = default(CompensatedSum);
+        for (int i = 0; i < values.Count; i++)
+        {
+            double r = (values[i] - mean) / max;
+            sum.Add(r * r);
+        }
+
+        return max * Math.Sqrt(sum.Value / (values.Count - 1));
+    }
 
     /// <summary>Sample standard deviation s of at least two values.</summary>
     internal static double StandardDeviation(IReadOnlyList<double> values) => StandardDeviation(values, Mean(values));

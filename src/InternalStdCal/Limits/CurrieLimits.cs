@@ -28,7 +28,7 @@ public static class CurrieLimits
     /// <param name="quantificationFactor">k_Q of L_Q = k_Q·σ_Q; finite, &gt; 0; default 10.</param>
     /// <param name="quantificationSigma">σ_Q, the SD at the level of L_Q; null for σ0 (constant σ); finite, &gt; 0.</param>
     /// <returns>L_C, L_D, L_Q with factors, formula and source.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">An argument is outside its range.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">An argument is outside its range (α and β also ≥ 1.2E-16).</exception>
     public static CurrieLimitResult ForKnownSigma(double sigma0, double alpha = 0.05, double beta = 0.05, double quantificationFactor = 10, double? quantificationSigma = null)
     {
         Guard.Positive(sigma0, nameof(sigma0));
@@ -48,7 +48,7 @@ public static class CurrieLimits
     /// <param name="quantificationFactor">k_Q; finite, &gt; 0; default 10.</param>
     /// <param name="quantificationSigma">σ_Q; null for s0; finite, &gt; 0.</param>
     /// <returns>L_C, L_D (exact δ and the t-sum approximation), L_Q.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">An argument is outside its range.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">An argument is outside its range (α and β also ≥ 1.2E-16).</exception>
     public static CurrieLimitResult ForEstimatedSigma(double s0, int degreesOfFreedom, double alpha = 0.05, double beta = 0.05, double quantificationFactor = 10, double? quantificationSigma = null)
     {
         Guard.Positive(s0, nameof(s0));
@@ -68,6 +68,12 @@ public static class CurrieLimits
     {
         Guard.InOpenRange(alpha, 0, 0.5, nameof(alpha));
         Guard.InOpenRange(beta, 0, 0.5, nameof(beta));
+        if (1 - alpha == 1 || 1 - beta == 1)
+        {
+            // z(1 − α) needs 1 − α < 1 in binary64 (common practice: the quantile of 1 is infinite).
+            bool a = 1 - alpha == 1;
+            throw Guard.OutOfRange(a ? nameof(alpha) : nameof(beta), a ? alpha : beta, "at least 1.2E-16, so that 1 − " + (a ? "α" : "β") + " is below 1 in double precision");
+        }
         Guard.Positive(quantificationFactor, nameof(quantificationFactor));
         if (quantificationSigma is double q)
         {

@@ -37,7 +37,8 @@ public static class IchLimits
     /// <exception cref="ArgumentNullException"><paramref name="sigma"/> or <paramref name="calibration"/> is null.</exception>
     /// <exception cref="ArgumentException">The calibration is not a straight line or its slope is ≤ 0; the IS concentration
     /// is missing on the ratio axis or of another kind.</exception>
-    /// <exception cref="ArgumentOutOfRangeException">A factor is out of range, or the IS concentration is ≤ 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A factor is out of range, the IS concentration is ≤ 0, or
+    /// k_Q·σ/S overflows.</exception>
     public static IchLimitResult Compute(ResponseSigma sigma, RegressionCalibration calibration, Concentration? internalStandardConcentration = null, double detectionFactor = DefaultDetectionFactor, double quantificationFactor = DefaultQuantificationFactor)
     {
         Guard.NotNull(sigma, nameof(sigma));
@@ -57,7 +58,8 @@ public static class IchLimits
     /// <param name="quantificationFactor">As for the calibration overload.</param>
     /// <returns>The limits.</returns>
     /// <exception cref="ArgumentNullException"><paramref name="sigma"/> is null.</exception>
-    /// <exception cref="ArgumentOutOfRangeException">The slope or a factor is out of range, or the unit is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The slope or a factor is out of range, the unit is not defined,
+    /// or k_Q·σ/S overflows.</exception>
     public static IchLimitResult ComputeForSlope(ResponseSigma sigma, double slope, ConcentrationUnit unit, double detectionFactor = DefaultDetectionFactor, double quantificationFactor = DefaultQuantificationFactor)
     {
         Guard.NotNull(sigma, nameof(sigma));
@@ -79,6 +81,7 @@ public static class IchLimits
     private static IchLimitResult Create(ResponseSigma sigma, double slope, double axisFactor, ConcentrationUnit unit, double kd, double kq, string slopeText)
     {
         double perSlope = sigma.Value / slope * axisFactor;
+        Guard.FiniteResult(kq * perSlope, sigma.Value, nameof(sigma), "k_Q·σ/S"); // LOD and LOQ must be finite (common practice)
         bool ich = kd == DefaultDetectionFactor && kq == DefaultQuantificationFactor;
         string formula = "LOD = " + Text.G(kd) + "·σ/S, LOQ = " + Text.G(kq) + "·σ/S; " + sigma + "; " + slopeText;
         string source = ich

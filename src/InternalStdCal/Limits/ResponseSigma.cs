@@ -95,7 +95,7 @@ public sealed class ResponseSigma
     {
         double[] v = LimitCalibration.Finite(values, 2, paramName);
         double sd = LimitCalibration.StandardDeviation(v);
-        if (!(sd > 0))
+        if (!(sd > 0) || Array.TrueForAll(v, x => x == v[0]))
         {
             throw new ArgumentException($"Parameter '{paramName}' holds {Text.I(v.Length)} equal values; their SD is 0 and gives no limit.", paramName);
         }

@@ -29,7 +29,14 @@ public sealed class Balance
         double linearity = linearityLimit.Grams / Tolerances.RootThree;
         double repeatability = repeatabilityStandardDeviation.Grams;
         double resolution = readability.Grams / (2 * Tolerances.RootThree);
-        SingleReadingStandardUncertainty = Mass.FromGrams(Math.Sqrt((linearity * linearity) + (repeatability * repeatability) + (resolution * resolution)));
+        double u = Math.Sqrt((linearity * linearity) + (repeatability * repeatability) + (resolution * resolution));
+        if (double.IsInfinity(u))
+        {
+            // Squares of huge masses overflow; the scaled root sum of squares does not (common practice).
+            u = Propagation.RootSumSquares(new[] { linearity, repeatability, resolution });
+        }
+
+        SingleReadingStandardUncertainty = Mass.FromGrams(u);
     }
 
     /// <summary>Linearity ±L.</summary>

@@ -64,7 +64,7 @@ public abstract class DilutionStep
     /// <param name="finalVolume">Final volume of the diluted solution with its standard uncertainty; &gt; 0.</param>
     /// <param name="label">A description for budgets and reports; null gives "&lt;aliquot&gt; into &lt;final&gt;".</param>
     /// <returns>The step. It dilutes mass or amount concentrations and keeps their unit.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">A volume is 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A volume is 0, or the dilution factor overflows.</exception>
     /// <exception cref="ArgumentException"><paramref name="aliquot"/> ≥ <paramref name="finalVolume"/>.</exception>
     public static VolumetricDilution Volumetric(Measured<Volume> aliquot, Measured<Volume> finalVolume, string? label = null) =>
         new(aliquot, finalVolume, null, 0, label);
@@ -92,7 +92,7 @@ public abstract class DilutionStep
     /// <param name="totalMass">Total mass of the diluted solution (aliquot included); &gt; 0.</param>
     /// <param name="label">A description; null gives "&lt;aliquot&gt; into &lt;total&gt;".</param>
     /// <returns>The step. It dilutes mass fractions and keeps their unit.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">A mass is 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A mass is 0, or the dilution factor overflows.</exception>
     /// <exception cref="ArgumentException"><paramref name="aliquotMass"/> ≥ <paramref name="totalMass"/>.</exception>
     public static GravimetricDilution Gravimetric(Measured<Mass> aliquotMass, Measured<Mass> totalMass, string? label = null) =>
         new(aliquotMass, totalMass, null, 0, label);
@@ -125,6 +125,7 @@ public abstract class DilutionStep
         where T : struct, IQuantity<T>
     {
         double ratio = aliquot.RatioTo(final);
+        Guard.FiniteResult(1 / ratio, aliquot, aliquotName, "the dilution factor " + finalName + "/" + aliquotName);
         if (!(ratio < 1))
         {
             throw new ArgumentException(

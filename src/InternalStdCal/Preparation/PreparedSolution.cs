@@ -64,7 +64,7 @@ public sealed class PreparedSolution
         RequireKind(unit, ConcentrationKind.MassConcentration, "the substance is made up to a volume", nameof(unit));
 
         // g/L = g · 1 / L; one conversion to the caller's unit.
-        double gramsPerLitre = mass.Value.Grams * purity.MassFraction / finalVolume.Value.Litres;
+        double gramsPerLitre = Guard.FiniteResult(mass.Value.Grams * purity.MassFraction / finalVolume.Value.Litres, finalVolume.Value, nameof(finalVolume), "m·P/V");
         Concentration value = Quantities.Concentration.From(gramsPerLitre, ConcentrationUnit.GramPerLitre).ConvertTo(unit);
         var inputs = new[]
         {

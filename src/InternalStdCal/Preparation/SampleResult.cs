@@ -65,6 +65,7 @@ public sealed class SampleResult
     /// <returns>The result, in the unit of <paramref name="measured"/> (or its mass-based counterpart after a
     /// density step, e.g. mg/kg ↔ mg/L).</returns>
     /// <exception cref="ArgumentNullException"><paramref name="dilutions"/> is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The result in the sample overflows.</exception>
     /// <exception cref="ArgumentException">A dilution is null, or a step cannot have produced the kind of
     /// concentration that follows it.</exception>
     public static SampleResult Liquid(Measured<Concentration> measured, IReadOnlyList<DilutionStep> dilutions)
@@ -85,14 +86,15 @@ public sealed class SampleResult
     /// <exception cref="ArgumentException">A dilution is null, a step cannot have produced the kind that follows it,
     /// the digest concentration is not a mass concentration, or <paramref name="resultUnit"/> is not a
     /// mass-fraction unit.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="digestVolume"/> or <paramref name="sampleMass"/> is 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="digestVolume"/> or <paramref name="sampleMass"/> is 0,
+    /// or the result in the sample overflows.</exception>
     public static SampleResult Solid(Measured<Concentration> measured, Measured<Volume> digestVolume, Measured<Mass> sampleMass, IReadOnlyList<DilutionStep> dilutions, ConcentrationUnit resultUnit)
     {
         Guard.PositiveQuantity(digestVolume.Value, nameof(digestVolume), "a volume");
         Guard.PositiveQuantity(sampleMass.Value, nameof(sampleMass), "a mass");
         Guard.NotNull(dilutions, nameof(dilutions));
         PreparedSolution.RequireKind(resultUnit, ConcentrationKind.MassFraction, "the result refers to the mass of sample", nameof(resultUnit));
-        double litresPerKilogram = digestVolume.Value.Litres / sampleMass.Value.Kilograms;
+        double litresPerKilogram = Guard.FiniteResult(digestVolume.Value.Litres / sampleMass.Value.Kilograms, sampleMass.Value, nameof(sampleMass), "V_digest/m_sample");
         var terms = new List<BudgetTerm>
         {
             BudgetTerm.Of(SampleStage, "digest volume", digestVolume, +1),
@@ -123,7 +125,8 @@ public sealed class SampleResult
     /// <exception cref="ArgumentNullException"><paramref name="dilutions"/> is null.</exception>
     /// <exception cref="ArgumentException">A dilution is null, a step cannot have produced the kind that follows it,
     /// the digest concentration is not a mass fraction, or <paramref name="resultUnit"/> is not a mass-fraction unit.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="digestMass"/> or <paramref name="sampleMass"/> is 0.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="digestMass"/> or <paramref name="sampleMass"/> is 0,
+    /// or the result in the sample overflows.</exception>
     public static SampleResult Solid(Measured<Concentration> measured, Measured<Mass> digestMass, Measured<Mass> sampleMass, IReadOnlyList<DilutionStep> dilutions, ConcentrationUnit resultUnit)
     {
         Guard.PositiveQuantity(digestMass.Value, nameof(digestMass), "a mass");
@@ -222,7 +225,16 @@ public sealed class SampleResult
             return toSample(c);
         }
 
-        Concentration result = Model(measured.Value);
+        Concentration result;
+        try
+        {
+            result = Model(measured.Value);
+        }
+        catch (ArgumentOutOfRangeException e) when (e.ParamName == "value")
+        {
+            // The back-calculated result must be finite (common practice: never ∞ silently).
+            throw new ArgumentOutOfRangeException(nameof(measured), $"Parameter 'measured' was {measured.Value}; it must keep the result in the sample finite (the dilution factors make it overflow).");
+        }
         var contributions = new double[terms.Count];
         contributions[0] = Math.Abs(Model(Concentration.From(measured.StandardUncertainty.Value, measured.Value.Unit)).Value);
         for (int i = 1; i < terms.Count; i++)

@@ -87,14 +87,14 @@ public static class VolumetricEquipment
     /// <param name="randomErrorStandardDeviation">Random error (repeatability) as a standard deviation at this volume, ≥ 0.</param>
     /// <param name="distribution">Distribution assumed for the systematic error.</param>
     /// <returns>The volume with its combined standard uncertainty, in the unit of <paramref name="setVolume"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="setVolume"/> is 0, or
-    /// <paramref name="distribution"/> is not defined.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="setVolume"/> is 0,
+    /// <paramref name="distribution"/> is not defined, or a component overflows in the unit of the set volume.</exception>
     public static Measured<Volume> AdjustablePipette(Volume setVolume, Volume systematicErrorLimit, Volume randomErrorStandardDeviation, ToleranceDistribution distribution)
     {
         Guard.PositiveQuantity(setVolume, nameof(setVolume), "a volume");
         (double divisor, _) = Tolerances.Divisor(distribution, nameof(distribution));
-        double systematic = systematicErrorLimit.In(setVolume.Unit) / divisor;
-        double random = randomErrorStandardDeviation.In(setVolume.Unit);
+        double systematic = In(systematicErrorLimit, setVolume.Unit, nameof(systematicErrorLimit)) / divisor;
+        double random = In(randomErrorStandardDeviation, setVolume.Unit, nameof(randomErrorStandardDeviation));
         return Combined(setVolume, new[] { systematic, random });
     }
 
@@ -108,12 +108,20 @@ public static class VolumetricEquipment
     /// (<see cref="WaterExpansionCoefficientPerKelvin"/> for dilute aqueous solutions; the glass's own expansion is
     /// much smaller and neglected, as in QUAM).</param>
     /// <returns>The standard uncertainty, in the unit of <paramref name="volume"/>.</returns>
-    /// <exception cref="ArgumentOutOfRangeException">A number is negative, NaN or ±∞.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">A number is negative, NaN or ±∞, or V·α·ΔT overflows.</exception>
     public static Volume TemperatureEffect(Volume volume, double temperatureHalfRangeKelvin, double expansionCoefficientPerKelvin)
     {
         Guard.NonNegative(temperatureHalfRangeKelvin, nameof(temperatureHalfRangeKelvin));
         Guard.NonNegative(expansionCoefficientPerKelvin, nameof(expansionCoefficientPerKelvin));
-        return volume.Scale(expansionCoefficientPerKelvin * temperatureHalfRangeKelvin / Tolerances.RootThree);
+        try
+        {
+            return volume.Scale(expansionCoefficientPerKelvin * temperatureHalfRangeKelvin / Tolerances.RootThree);
+        }
+        catch (ArgumentOutOfRangeException)
+        {
+            // u must be a finite volume (common practice: never return ∞ silently).
+            throw Guard.OutOfRange(nameof(temperatureHalfRangeKelvin), temperatureHalfRangeKelvin, $"small enough that V·α·ΔT/√3 stays finite (V = {volume}, α = {Guard.Format(expansionCoefficientPerKelvin)} 1/K)");
+        }
     }
 
     /// <summary>
@@ -167,4 +175,8 @@ public static class VolumetricEquipment
 
     private static System.Collections.ObjectModel.ReadOnlyCollection<Volume> Sizes((double Nominal, double Tolerance)[] table) =>
         Array.AsReadOnly(table.Select(t => Volume.FromMillilitres(t.Nominal)).ToArray());
+
+    // Volume.In that names the caller's parameter when the value overflows in the set volume's unit.
+    private static double In(Volume volume, VolumeUnit unit, string paramName) =>
+        PowerOfTen.ScaleChecked(volume.Value, UnitTable.Exponent(volume.Unit) - UnitTable.Exponent(unit), UnitTable.Symbol(volume.Unit), UnitTable.Symbol(unit), paramName);
 }

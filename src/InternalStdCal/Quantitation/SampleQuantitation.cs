@@ -30,7 +30,8 @@ public static class SampleQuantitation
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentException">The IS concentration is of another kind than the calibration's unit, or the
     /// mean response cannot be read off the calibration function (a quadratic that never reaches it).</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1).</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="confidenceLevel"/> is not in (0, 1), or
+    /// <paramref name="intervalMethod"/> is not defined.</exception>
     /// <exception cref="InvalidOperationException">The calibration's sensitivity is 0 at the result (zero slope, or the
     /// vertex of a parabola), so no standard error exists.</exception>
     public static QuantitationResult Quantify(RatioCalibration calibration, UnknownSample sample, double confidenceLevel = 0.95, InverseIntervalMethod intervalMethod = InverseIntervalMethod.Symmetric)
@@ -38,6 +39,11 @@ public static class SampleQuantitation
         Guard.NotNull(calibration, nameof(calibration));
         Guard.NotNull(sample, nameof(sample));
         Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
+        if (intervalMethod is not (InverseIntervalMethod.Symmetric or InverseIntervalMethod.Fieller))
+        {
+            throw new ArgumentOutOfRangeException(nameof(intervalMethod), intervalMethod, $"Parameter 'intervalMethod' was {(int)intervalMethod}; it must be Symmetric or Fieller.");
+        }
+
         Concentration isConc = sample.InternalStandardConcentration;
         if (isConc.Kind != Concentration.KindOf(calibration.Unit))
         {

@@ -141,7 +141,8 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <param name="molarMass">The molar mass of the analyte (not <c>default</c>).</param>
     /// <returns>The converted concentration.</returns>
     /// <exception cref="ArgumentException">The conversion would involve a mass fraction, which needs a density.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="molarMass"/> is <c>default</c> (0 g/mol).</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="molarMass"/> is <c>default</c> (0 g/mol), or the
+    /// converted value overflows.</exception>
     public Concentration ConvertTo(ConcentrationUnit unit, MolarMass molarMass)
     {
         Guard.Positive(molarMass.GramsPerMole, nameof(molarMass));
@@ -154,12 +155,12 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
 
         if (from == ConcentrationKind.MassConcentration && to == ConcentrationKind.AmountConcentration)
         {
-            return From(BaseValue / molarMass.GramsPerMole, ConcentrationUnit.MolePerLitre).ConvertTo(unit);
+            return From(Guard.FiniteResult(BaseValue / molarMass.GramsPerMole, molarMass, nameof(molarMass), "the converted concentration"), ConcentrationUnit.MolePerLitre).ConvertTo(unit);
         }
 
         if (from == ConcentrationKind.AmountConcentration && to == ConcentrationKind.MassConcentration)
         {
-            return From(BaseValue * molarMass.GramsPerMole, ConcentrationUnit.GramPerLitre).ConvertTo(unit);
+            return From(Guard.FiniteResult(BaseValue * molarMass.GramsPerMole, molarMass, nameof(molarMass), "the converted concentration"), ConcentrationUnit.GramPerLitre).ConvertTo(unit);
         }
 
         throw KindMismatch(nameof(unit), UnitDescription(unit), "A molar mass links mass and amount concentration only; mass fractions need a Density.");
@@ -171,7 +172,8 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     /// <param name="density">The density of the solution or sample (not <c>default</c>).</param>
     /// <returns>The converted concentration.</returns>
     /// <exception cref="ArgumentException">The conversion involves an amount concentration.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="density"/> is <c>default</c> (0 g/mL).</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="density"/> is <c>default</c> (0 g/mL), or the
+    /// converted value overflows.</exception>
     public Concentration ConvertTo(ConcentrationUnit unit, Density density)
     {
         Guard.Positive(density.GramsPerMillilitre, nameof(density));
@@ -185,19 +187,23 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
         // Base units: g/kg · kg/L = g/L.
         if (from == ConcentrationKind.MassFraction && to == ConcentrationKind.MassConcentration)
         {
-            return From(BaseValue * density.KilogramsPerLitre, ConcentrationUnit.GramPerLitre).ConvertTo(unit);
+            return From(Guard.FiniteResult(BaseValue * density.KilogramsPerLitre, density, nameof(density), "the converted concentration"), ConcentrationUnit.GramPerLitre).ConvertTo(unit);
         }
 
         if (from == ConcentrationKind.MassConcentration && to == ConcentrationKind.MassFraction)
         {
-            return From(BaseValue / density.KilogramsPerLitre, ConcentrationUnit.GramPerKilogram).ConvertTo(unit);
+            return From(Guard.FiniteResult(BaseValue / density.KilogramsPerLitre, density, nameof(density), "the converted concentration"), ConcentrationUnit.GramPerKilogram).ConvertTo(unit);
         }
 
         throw KindMismatch(nameof(unit), UnitDescription(unit), "A density links mass fraction and mass concentration only; amount concentrations need a MolarMass.");
     }
 
     /// <inheritdoc />
-    public Concentration InUnitOf(Concentration reference) => ConvertTo(reference.Unit);
+    public Concentration InUnitOf(Concentration reference)
+    {
+        RequireSameKind(reference, nameof(reference));
+        return ConvertTo(reference.Unit);
+    }
 
     /// <inheritdoc />
     public double RatioTo(Concentration denominator)
@@ -209,11 +215,11 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
             throw new ArgumentException("Parameter 'denominator' is zero; a ratio needs a non-zero denominator.", nameof(denominator));
         }
 
-        return Value / denominator.In(Unit);
+        return Guard.FiniteResult(Value / denominator.In(Unit), denominator, nameof(denominator), "the ratio");
     }
 
     /// <inheritdoc />
-    public Concentration Scale(double factor) => From(Value * Guard.Finite(factor, nameof(factor)), Unit);
+    public Concentration Scale(double factor) => From(Value * Guard.FiniteProduct(Guard.Finite(factor, nameof(factor)), Math.Max(Math.Abs(Value), Math.Abs(BaseValue)), nameof(factor)), Unit);
 
     /// <summary>True when both are of the same kind and differ by no more than
     /// <paramref name="relativeTolerance"/> · max(|a|, |b|).</summary>
@@ -262,6 +268,7 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     public static Concentration Parse(string text, ConcentrationKind partsPerKind)
     {
         UnitTable.SplitValueAndUnit(text, nameof(text), out double value, out string symbol);
+        _ = PartsPerUnit(partsPerKind, ConcentrationUnit.MilligramPerLitre, ConcentrationUnit.MilligramPerKilogram, nameof(partsPerKind));
         return symbol switch
         {
             "ppm" => FromPartsPerMillion(value, partsPerKind),

@@ -27,6 +27,7 @@ public readonly struct Density : IEquatable<Density>, IFormattable
     /// <param name="mass">The mass.</param>
     /// <returns>The volume in mL.</returns>
     /// <exception cref="InvalidOperationException">This is <c>default</c> (zero density).</exception>
+    /// <exception cref="ArgumentOutOfRangeException">m / ρ overflows.</exception>
     public Volume VolumeOf(Mass mass)
     {
         if (GramsPerMillilitre == 0)
@@ -34,7 +35,13 @@ public readonly struct Density : IEquatable<Density>, IFormattable
             throw new InvalidOperationException("A default(Density) is zero; create densities with FromGramsPerMillilitre.");
         }
 
-        return Volume.FromMillilitres(mass.Grams / GramsPerMillilitre);
+        double millilitres = mass.Grams / GramsPerMillilitre;
+        if (double.IsInfinity(millilitres))
+        {
+            throw new ArgumentOutOfRangeException(nameof(mass), $"Parameter 'mass' was {mass}; at {this} it must be small enough that m / ρ stays finite.");
+        }
+
+        return Volume.FromMillilitres(millilitres);
     }
 
     /// <inheritdoc />

@@ -17,6 +17,7 @@ public interface IQuantity<T> : IEquatable<T>, IComparable<T>, IFormattable
     /// <param name="denominator">A non-zero quantity of the same kind.</param>
     /// <returns>The ratio of the two quantities, independent of their units.</returns>
     /// <exception cref="ArgumentException">The quantities are of different kinds, or the denominator is zero.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The denominator is so small that the ratio overflows.</exception>
     double RatioTo(T denominator);
 
     /// <summary>The quantity multiplied by a dimensionless factor, in the same unit.</summary>

@@ -114,14 +114,14 @@ public readonly struct Mass : IQuantity<Mass>, IComparable
             throw new ArgumentException("Parameter 'denominator' is zero; a ratio needs a non-zero denominator.", nameof(denominator));
         }
 
-        return Value / denominator.In(Unit);
+        return Guard.FiniteResult(Value / denominator.In(Unit), denominator, nameof(denominator), "the ratio");
     }
 
     /// <summary>The mass multiplied by a non-negative factor, in the same unit.</summary>
     /// <param name="factor">Finite and ≥ 0 (a mass cannot be negative).</param>
     /// <returns>The scaled mass.</returns>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="factor"/> is negative, NaN or ±∞, or the product overflows.</exception>
-    public Mass Scale(double factor) => From(Value * Guard.NonNegative(factor, nameof(factor)), Unit);
+    public Mass Scale(double factor) => From(Value * Guard.FiniteProduct(Guard.NonNegative(factor, nameof(factor)), Math.Max(Value, Grams), nameof(factor)), Unit);
 
     /// <summary>Parses the printed form "&lt;number&gt; &lt;unit&gt;" (invariant culture), e.g. "100.28 mg".</summary>
     /// <param name="text">The text; the micro prefix may be written µ, μ or u.</param>

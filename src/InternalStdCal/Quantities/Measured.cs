@@ -106,13 +106,24 @@ public static class Measured
     /// <param name="coverageFactor">k, &gt; 0 (usually 2).</param>
     /// <returns>The measured value with infinite degrees of freedom.</returns>
     /// <exception cref="ArgumentException">U is negative or of another kind.</exception>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageFactor"/> ≤ 0 or not finite.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageFactor"/> ≤ 0 or not finite, or so small that U/k overflows.</exception>
     public static Measured<T> FromExpandedUncertainty<T>(T value, T expandedUncertainty, double coverageFactor)
         where T : struct, IQuantity<T>
     {
         Guard.Positive(coverageFactor, nameof(coverageFactor));
         RequireNonNegative(expandedUncertainty, value, nameof(expandedUncertainty));
-        return new(value, expandedUncertainty.Scale(1 / coverageFactor), null, UncertaintyEvaluation.TypeBExpanded);
+        T standardUncertainty;
+        try
+        {
+            standardUncertainty = expandedUncertainty.Scale(1 / coverageFactor);
+        }
+        catch (ArgumentOutOfRangeException)
+        {
+            // u = U/k must be a finite quantity (common practice: never return ∞ silently).
+            throw Guard.OutOfRange(nameof(coverageFactor), coverageFactor, $"large enough that U/k stays finite (U = {expandedUncertainty})");
+        }
+
+        return new(value, standardUncertainty, null, UncertaintyEvaluation.TypeBExpanded);
     }
 
     internal static void RequireNonNegative<T>(T uncertainty, T value, string paramName)
@@ -179,7 +190,8 @@ public readonly struct Measured<T> : IEquatable<Measured<T>>, IFormattable
     public UncertaintyEvaluation Evaluation { get; }
 
     /// <summary>u / |value|, dimensionless.</summary>
-    /// <exception cref="InvalidOperationException">The value is zero, so a relative uncertainty is undefined.</exception>
+    /// <exception cref="InvalidOperationException">The value is zero, so a relative uncertainty is undefined, or
+    /// u / |value| overflows.</exception>
     public double RelativeStandardUncertainty
     {
         get
@@ -189,15 +201,33 @@ public readonly struct Measured<T> : IEquatable<Measured<T>>, IFormattable
                 throw new InvalidOperationException($"The value is zero ({Value}); a relative uncertainty is undefined.");
             }
 
-            return StandardUncertainty.Value / Math.Abs(Value.Value);
+            double relative = StandardUncertainty.Value / Math.Abs(Value.Value);
+            if (double.IsInfinity(relative))
+            {
+                throw new InvalidOperationException($"u / |value| = {StandardUncertainty} / {Value} overflows; a relative uncertainty must be finite.");
+            }
+
+            return relative;
         }
     }
 
     /// <summary>Expanded uncertainty U = k·u (JCGM 100:2008 §6.2).</summary>
     /// <param name="coverageFactor">k, &gt; 0 (2 gives about 95 % coverage for a normal distribution).</param>
     /// <returns>U in the unit of the value.</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageFactor"/> ≤ 0 or not finite.</exception>
-    public T ExpandedUncertainty(double coverageFactor) => StandardUncertainty.Scale(Guard.Positive(coverageFactor, nameof(coverageFactor)));
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="coverageFactor"/> ≤ 0 or not finite, or so large that k·u overflows.</exception>
+    public T ExpandedUncertainty(double coverageFactor)
+    {
+        Guard.Positive(coverageFactor, nameof(coverageFactor));
+        try
+        {
+            return StandardUncertainty.Scale(coverageFactor);
+        }
+        catch (ArgumentOutOfRangeException)
+        {
+            // U = k·u must be a finite quantity (common practice: never return ∞ silently).
+            throw Guard.OutOfRange(nameof(coverageFactor), coverageFactor, $"small enough that k·u stays finite (u = {StandardUncertainty})");
+        }
+    }
 
     /// <summary>Prints e.g. "10 mg/L, u = 0.05 mg/L (TypeA, ν = 9)", invariant culture.</summary>
     /// <returns>The text.</returns>

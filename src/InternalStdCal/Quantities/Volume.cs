@@ -102,14 +102,14 @@ public readonly struct Volume : IQuantity<Volume>, IComparable
             throw new ArgumentException("Parameter 'denominator' is zero; a ratio needs a non-zero denominator.", nameof(denominator));
         }
 
-        return Value / denominator.In(Unit);
+        return Guard.FiniteResult(Value / denominator.In(Unit), denominator, nameof(denominator), "the ratio");
     }
 
     /// <summary>The volume multiplied by a non-negative factor, in the same unit.</summary>
     /// <param name="factor">Finite and ≥ 0 (a volume cannot be negative).</param>
     /// <returns>The scaled volume.</returns>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="factor"/> is negative, NaN or ±∞, or the product overflows.</exception>
-    public Volume Scale(double factor) => From(Value * Guard.NonNegative(factor, nameof(factor)), Unit);
+    public Volume Scale(double factor) => From(Value * Guard.FiniteProduct(Guard.NonNegative(factor, nameof(factor)), Math.Max(Value, BaseValue), nameof(factor)), Unit);
 
     /// <summary>Parses the printed form "&lt;number&gt; &lt;unit&gt;" (invariant culture), e.g. "100 µL".</summary>
     /// <param name="text">The text; the micro prefix may be written µ, μ or u.</param>

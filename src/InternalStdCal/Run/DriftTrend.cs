@@ -121,6 +121,7 @@ public sealed class DriftTrend
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentException">Fewer than 3 values, a value not finite (the message names the index), or
     /// a mean ≤ 0 (the percentages need a positive mean).</exception>
+    /// <exception cref="InvalidOperationException">The slope interval overflows (absurd magnitudes).</exception>
     public static DriftTrend Fit(IReadOnlyList<double> values, DriftRule rule)
     {
         Guard.NotNull(values, nameof(values));
@@ -142,6 +143,7 @@ public sealed class DriftTrend
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentException">Fewer than 3 values, counts differ, a value or position not finite (the
     /// message names the index), fewer than 2 distinct positions, positions numerically degenerate, or a mean ≤ 0.</exception>
+    /// <exception cref="InvalidOperationException">The slope interval overflows (absurd magnitudes).</exception>
     public static DriftTrend Fit(IReadOnlyList<double> positions, IReadOnlyList<double> values, DriftRule rule)
     {
         Guard.NotNull(rule, nameof(rule));

@@ -351,7 +351,7 @@ public sealed class InternalStandardSelection
 
     private static double CentredSumOfSquares(double[] v) => SampleStatistics.CentredSumOfSquares(v, Mean(v));
 
-    private static double Sd(double[] v) => Math.Sqrt(CentredSumOfSquares(v) / (v.Length - 1));
+    private static double Sd(double[] v) => SampleStatistics.StandardDeviation(v);
 
     private static double Rsd(double[] v) => 100 * Sd(v) / Mean(v);
 

@@ -156,6 +156,11 @@ public static class RunProcessor
             string suffix = " (Parameter '" + e.ParamName + "')";
             return new DriftCheck(kind, name, orders, null, message.EndsWith(suffix, StringComparison.Ordinal) ? message.Substring(0, message.Length - suffix.Length) : message);
         }
+        catch (InvalidOperationException e)
+        {
+            // An interval that overflows (absurd signals) is a note on the check, never an exception from the run.
+            return new DriftCheck(kind, name, orders, null, e.Message);
+        }
     }
 
     private sealed class RowState

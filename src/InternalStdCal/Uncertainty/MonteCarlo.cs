@@ -216,7 +216,14 @@ internal static class MonteCarlo
             }
         }
 
-        return new Summary(mean, ss.Value, Math.Sqrt(ss.Value / (count - 1)), symLow, symHigh, values[offset + best - 1], values[offset + best + q - 1]);
+        double sd = Math.Sqrt(ss.Value / (count - 1));
+        if (double.IsNaN(sd) || double.IsInfinity(sd))
+        {
+            // Squares of huge trial values overflow; the scaled form does not (never NaN silently).
+            sd = SampleStatistics.StandardDeviation(new ArraySegment<double>(values, offset, count), mean);
+        }
+
+        return new Summary(mean, ss.Value, sd, symLow, symHigh, values[offset + best - 1], values[offset + best + q - 1]);
     }
 
     internal readonly struct Summary
