@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using InternalStdCal.Internal;
 
 namespace InternalStdCal.Calibration;
@@ -17,12 +18,15 @@ namespace InternalStdCal.Calibration;
 /// <para><b>Bound.</b> Each computed sum of n terms, each term carrying ≤ 4 roundings, errs by at most
 /// γ·Σ|term| with γ = (n + 6)·u, u = 2⁻⁵³ (Higham, "Accuracy and Stability of Numerical Algorithms", 2nd ed.,
 /// §3.1, first order in u). With Cauchy–Schwarz, Σw|dx·dy| ≤ √(Qxx·Qyy) and |Sdx·Sdy|/Σw ≤ √(Qxx·Qyy), so
-/// |δb/b| ≤ E_b = γ·(2√(Qxx·Qyy)/|Sxy| + Qxx/Sxx); for a = ȳw − b·x̄w, |δa| ≤ E_b·|b·x̄w| +
-/// γ·√(2(Qyy + b²·Qxx)/Σw) (errors of the shifts Sdy/Σw and b·Sdx/Σw) + u·|a|. The coefficients are kept when
-/// E_b ≤ τ and |δa| ≤ τ·|a|; otherwise the sums are formed again about the means (if the first centre was poor,
-/// Qxx &gt; 4·Sxx) and, if the bound still fails, one refinement pass on residuals split exactly
-/// (TwoSum/TwoProduct) corrects a and b. τ = 2⁻⁴⁰ ≈ 9.1e-13: at least 12 correct significant digits of the
-/// least-squares solution for the given doubles, the accuracy the NIST StRD checks of this library require.</para>
+/// |δb/b| ≤ E_b = γ·(2√(Qxx·Qyy)/|Sxy| + Qxx/Sxx). For a = (m − b·c) + (shiftY − b·shiftX):
+/// |δa| ≤ E_b·|b·x̄w| + γ·√(2(Qyy + b²·Qxx)/Σw) (errors of the shifts Sdy/Σw and b·Sdx/Σw) + 4u·(|m| + |b·c| +
+/// |shiftY| + |b·shiftX| + |a|) (the roundings of the formula). The coefficients are kept when E_b ≤ τ and
+/// |δa| ≤ τ·|a| (and no product in the bound is below 1e-290, where underflow could hide an error); otherwise
+/// the sums are formed again about the means (if the first centre was poor, Qxx &gt; 4·Sxx) and, if the bound
+/// still fails, one refinement pass on residuals split exactly (TwoSum/TwoProduct) corrects a and b, and a is
+/// formed with compensated arithmetic. τ = 2⁻⁴⁰ ≈ 9.1e-13: at least 12 correct significant digits of the
+/// least-squares solution for the given doubles, the accuracy the NIST StRD checks of this library require.
+/// Because γ grows with n, fits of more than ~8 000 points always take the refinement pass.</para>
 /// </remarks>
 internal static class LineFitKernel
 {
@@ -44,6 +48,7 @@ internal static class LineFitKernel
     /// <paramref name="fit"/> undefined, for a non-finite value, an undefined weight, all x equal, or sums outside
     /// the safe range (1e-100 &lt; Σw &lt; 1e100, every sum finite); the caller then takes the checked path.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static bool TryFit(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Weighting weighting, double weightScale, out LineFit fit) =>
         weighting.Scheme switch
         {
@@ -78,39 +83,35 @@ internal static class LineFitKernel
             return false;
         }
 
-        double deltaB = 0, deltaAlpha = 0;
-        bool refined = false;
-        if (!line.Accurate)
+        if (!line.Accurate && s.Qxx > 4 * line.Sxx)
         {
-            if (s.Qxx > 4 * line.Sxx)
+            // The first point was a poor centre: centre again at the means.
+            c += line.ShiftX;
+            m += line.ShiftY;
+            s = Accumulate(x, y, weights, weightScale, c, m);
+            line = Solve(s, n);
+            if (!line.Valid)
             {
-                // The first point was a poor centre: centre again at the means.
-                c += line.ShiftX;
-                m += line.ShiftY;
-                s = Accumulate(x, y, weights, weightScale, c, m);
-                line = Solve(s, n);
-                if (!line.Valid)
-                {
-                    return false;
-                }
-            }
-
-            if (!line.Accurate)
-            {
-                (deltaB, deltaAlpha) = Refine(x, y, weights, weightScale, c, m, s.Sw, line);
-                refined = true;
+                return false;
             }
         }
 
-        // a = m + α − b·c with α = shiftY − b·shiftX, plus the refinement's corrections, compensated.
-        double b = line.Slope;
-        double alpha = line.ShiftY - (b * line.ShiftX);
-        var a = default(CompensatedSum);
-        a.Add(m);
-        a.Add(alpha + deltaAlpha);
-        a.AddProduct(-b, c);
-        a.Add(-deltaB * c);
-        double normaliser = n / s.Sw;
+        double b = line.Slope, intercept = line.Intercept;
+        bool refined = !line.Accurate;
+        if (refined)
+        {
+            // a = m + α − b·c plus the refinement's corrections, compensated.
+            (double deltaB, double deltaAlpha) = Refine(x, y, weights, weightScale, c, m, s.Sw, line);
+            var a = default(CompensatedSum);
+            a.Add(m);
+            a.Add(line.ShiftY - (b * line.ShiftX) + deltaAlpha);
+            a.AddProduct(-b, c);
+            a.Add(-deltaB * c);
+            intercept = a.Value;
+            b += deltaB;
+        }
+
+        double normaliser = n * (1 / s.Sw);
         fit = new LineFit(
             weighting,
             n,
@@ -119,8 +120,8 @@ internal static class LineFitKernel
             c + line.ShiftX,
             m + line.ShiftY,
             line.Sxx * normaliser,
-            a.Value,
-            b + deltaB,
+            intercept,
+            b,
             minX,
             maxX,
             refined);
@@ -128,6 +129,7 @@ internal static class LineFitKernel
     }
 
     /// <summary>One pass: Σw, Σw·dx, Σw·dy, Σw·dx², Σw·dx·dy, Σw·dy² about (c, m), the smallest w and the x range.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Sums Accumulate<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m)
         where TWeight : struct, IPointWeight
     {
@@ -152,26 +154,39 @@ internal static class LineFitKernel
         return new Sums(c, m, sw, sdx, sdy, qxx, qxy, qyy, minW, minX, maxX);
     }
 
-    /// <summary>Slope, shifts and corrected Sxx from the sums, and whether the bound of the remarks is met.</summary>
+    /// <summary>Slope, shifts, corrected Sxx and the plain intercept from the sums, and whether the bound of the
+    /// remarks is met (tested without square roots or further divisions).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Solution Solve(in Sums s, int n)
     {
-        double shiftX = s.Sdx / s.Sw, shiftY = s.Sdy / s.Sw;
+        double inverseSw = 1 / s.Sw;
+        double shiftX = s.Sdx * inverseSw, shiftY = s.Sdy * inverseSw;
         double sxx = s.Qxx - (s.Sdx * shiftX);
         double sxy = s.Qxy - (s.Sdx * shiftY);
-        double b = sxy / sxx;
+        double inverseSxx = 1 / sxx;
+        double b = sxy * inverseSxx;
         bool valid = sxx > 0 && b - b == 0;
 
-        double gamma = (n + 6) * UnitRoundoff;
-        double slopeBound = gamma * ((2 * Math.Sqrt(s.Qxx * s.Qyy) / Math.Abs(sxy)) + (s.Qxx / sxx));
-        double meanX = s.CenterX + shiftX;
-        double intercept = s.CenterY + shiftY - (b * meanX);
-        double interceptBound = (slopeBound * Math.Abs(b * meanX))
-            + (gamma * Math.Sqrt(2 * (s.Qyy + (b * b * s.Qxx)) / s.Sw))
-            + (UnitRoundoff * Math.Abs(intercept));
+        // a = (m − b·c) + α, α = shiftY − b·shiftX: the value when no refinement is needed.
+        double bc = b * s.CenterX, bShift = b * shiftX;
+        double alpha = shiftY - bShift;
+        double intercept = (s.CenterY - bc) + alpha;
 
-        // NaN bounds (0/0) fail the test and lead to refinement.
-        bool accurate = slopeBound <= Tolerance && interceptBound <= Tolerance * Math.Abs(intercept);
-        return new Solution(b, shiftX, shiftY, sxx, valid, accurate);
+        // Sufficient conditions for E_b ≤ τ and |δa| ≤ τ·|a| (remarks), τ split equally between the terms and
+        // squared: K = Qxx/Sxx, P²·b² = K·Qyy/Sxx. The guards on a² and b² keep every product clear of overflow
+        // and of underflow that could hide an error; anything else (NaN, ∞) fails and leads to refinement.
+        double gamma = (n + 6) * UnitRoundoff, gamma2 = gamma * gamma;
+        double k = s.Qxx * inverseSxx, kyy = k * s.Qyy * inverseSxx;
+        double meanX = s.CenterX + shiftX, a2 = intercept * intercept, b2 = b * b;
+        double rounding = Math.Abs(s.CenterY) + Math.Abs(bc) + Math.Abs(shiftY) + Math.Abs(bShift) + Math.Abs(intercept);
+        bool accurate = a2 > 1e-280 && a2 < 1e280 && b2 > 1e-280 && b2 < 1e280
+            && 2 * gamma * k <= Tolerance
+            && 16 * gamma2 * kyy <= Tolerance * Tolerance * b2
+            && 6 * gamma * k * Math.Abs(b * meanX) <= Tolerance * Math.Abs(intercept)
+            && 144 * gamma2 * kyy * meanX * meanX <= Tolerance * Tolerance * a2
+            && 18 * gamma2 * (s.Qyy + (b2 * s.Qxx)) * inverseSw <= Tolerance * Tolerance * a2
+            && 12 * UnitRoundoff * rounding <= Tolerance * Math.Abs(intercept);
+        return new Solution(b, intercept, shiftX, shiftY, sxx, valid, accurate);
     }
 
     /// <summary>
@@ -241,9 +256,10 @@ internal static class LineFitKernel
 
     private readonly struct Solution
     {
-        internal Solution(double slope, double shiftX, double shiftY, double sxx, bool valid, bool accurate)
+        internal Solution(double slope, double intercept, double shiftX, double shiftY, double sxx, bool valid, bool accurate)
         {
             Slope = slope;
+            Intercept = intercept;
             ShiftX = shiftX;
             ShiftY = shiftY;
             Sxx = sxx;
@@ -252,6 +268,8 @@ internal static class LineFitKernel
         }
 
         internal double Slope { get; }
+
+        internal double Intercept { get; }
 
         internal double ShiftX { get; }
 
