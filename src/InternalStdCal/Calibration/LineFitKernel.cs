@@ -20,8 +20,9 @@ namespace InternalStdCal.Calibration;
 /// §3.1, first order in u). With Cauchy–Schwarz, Σw|dx·dy| ≤ √(Qxx·Qyy) and |Sdx·Sdy|/Σw ≤ √(Qxx·Qyy), so
 /// |δb/b| ≤ E_b = γ·(2√(Qxx·Qyy)/|Sxy| + Qxx/Sxx). For a = (m − b·c) + (shiftY − b·shiftX):
 /// |δa| ≤ E_b·|b·x̄w| + γ·√(2(Qyy + b²·Qxx)/Σw) (errors of the shifts Sdy/Σw and b·Sdx/Σw) + 4u·(|m| + |b·c| +
-/// |shiftY| + |b·shiftX| + |a|) (the roundings of the formula). The coefficients are kept when E_b ≤ τ and
-/// |δa| ≤ τ·|a| (and no product in the bound is below 1e-290, where underflow could hide an error); otherwise
+/// |shiftY| + |b·shiftX| + |a|) (the roundings of the formula). The coefficients are kept when sufficient
+/// conditions for E_b ≤ τ and |δa| ≤ τ·|a| hold: each term at most its equal share of τ, compared squared (no
+/// square roots), with a² and b² inside 1e-280…1e280 so that no product overflows or underflows; otherwise
 /// the sums are formed again about the means (if the first centre was poor, Qxx &gt; 4·Sxx) and, if the bound
 /// still fails, one refinement pass on residuals split exactly (TwoSum/TwoProduct) corrects a and b, and a is
 /// formed with compensated arithmetic. τ = 2⁻⁴⁰ ≈ 9.1e-13: at least 12 correct significant digits of the
