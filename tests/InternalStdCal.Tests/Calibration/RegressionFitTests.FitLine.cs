@@ -115,7 +115,7 @@ public partial class RegressionFitTests
     }
 
     [Fact]
-    public void FitLine_InvariantCalibrationData_NeedsNoRefinementButNorrisLikeOffsetDoes()
+    public void FitLine_TypicalCalibrationData_NeedsNoRefinementButLargeOffsetDoes()
     {
         // Invented data: y ≈ 0.002 + 0.0198·x, |b·x̄w|/|a| ≈ 15 — the closed form alone meets the bound.
         double[] x = { 0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4 };
