@@ -10,7 +10,8 @@ namespace InternalStdCal.Benchmarks;
 /// <summary>
 /// Group 1. 1/x-weighted straight-line fit of n standards: the library against a closed-form Σ loop (the floor:
 /// weights precomputed, two passes, slope only, no validation, copies or statistics) and MathNet.Numerics
-/// (WeightedRegression.Weighted; Fit.Line, which is unweighted). Invented, fixed-seed data.
+/// (WeightedRegression.Weighted; Fit.Line, which is unweighted). Invented, fixed-seed data. The library rows: the
+/// class path <c>RegressionFit.Fit</c> and the span path <c>RegressionFit.FitLine</c> (struct result).
 /// </summary>
 public class WeightedLineFitBenchmark
 {
@@ -57,6 +58,18 @@ public class WeightedLineFitBenchmark
     /// <summary>The fit (validation, copy, weights, a and b); statistics are computed on first use.</summary>
     [Benchmark]
     public double Library() => RegressionFit.Fit(x, y, CalibrationModel.Linear, Weighting.InverseX).Slope;
+
+    /// <summary>The allocation-free span entry point: checks, a and b (the same numbers as <see cref="Library"/>).</summary>
+    [Benchmark]
+    public double LibrarySpan() => RegressionFit.FitLine(x, y, Weighting.InverseX).Slope;
+
+    /// <summary>The span entry point plus the residual standard deviation on demand (one more pass).</summary>
+    [Benchmark]
+    public double LibrarySpanWithStatistics()
+    {
+        LineFit fit = RegressionFit.FitLine(x, y, Weighting.InverseX);
+        return fit.Slope + fit.ResidualStandardDeviation(x, y);
+    }
 
     /// <summary>The fit plus its first use of the residual statistics (s and SE(b)).</summary>
     [Benchmark]

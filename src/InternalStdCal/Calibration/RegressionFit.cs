@@ -11,14 +11,16 @@ namespace InternalStdCal.Calibration;
 /// bands and inverse prediction (x of an unknown from its response).
 /// </summary>
 /// <remarks>
-/// <para><b>Numerics.</b> Straight lines: closed form from weighted sums centred at the weighted means (corrected
-/// two-pass algorithm), then one refinement pass on residuals split exactly (TwoSum/TwoProduct), the intercept
-/// formed with compensated arithmetic; the fit allocates only the copies of x and y and the weights. Quadratic: the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x, rows multiplied by √w
+/// <para><b>Numerics.</b> Straight lines: the computation of <see cref="FitLine"/> (one checking pass of weighted
+/// sums about the first point, weights computed per point; a pass about the means and one refinement pass on
+/// residuals split exactly with TwoSum/TwoProduct only when a rounding-error bound asks for them, see
+/// <see cref="LineFit.IsRefined"/>); the fit keeps only copies of x and y.
+/// Quadratic: the centred basis 1, u, u² − 1 with u = (x − x̄w)/s_x, rows multiplied by √w
 /// and solved by Householder QR, coefficients and covariance transformed back to the a, b, c basis, followed
 /// by one step of iterative refinement on residuals computed with compensated arithmetic (the lines fall back
 /// to this path if a sum overflows or underflows). Residual statistics and the list properties are computed on
 /// first use. This reproduces every certified value of the NIST StRD sets Norris, Pontius, NoInt1 and NoInt2
-/// (coefficients, their standard deviations, residual SD, R²) to at least 13 significant digits.</para>
+/// (coefficients, their standard deviations, residual SD, R²) to at least 12 significant digits (13–15 measured).</para>
 /// <para><b>Formulas.</b> Ordinary and weighted least squares as in ISO 8466-1/-2 and Miller &amp; Miller,
 /// "Statistics and Chemometrics for Analytical Chemistry", ch. 5 (weighted form: Harvey, "Modern Analytical
 /// Chemistry", eqs 5.23–5.24). Weights are normalised to Σw = n; every statistic is invariant to rescaling all
@@ -31,10 +33,10 @@ namespace InternalStdCal.Calibration;
 /// </remarks>
 public sealed class RegressionFit
 {
-    // x, y and normalised weights of the standards (three arrays: below the large-object threshold up to ~10⁴ points).
+    // x and y of the standards (copies; below the large-object threshold up to ~10⁴ points). Weights are
+    // computed per point when needed (W), never stored.
     private readonly double[] _x;
     private readonly double[] _y;
-    private readonly double[] _w;
 
     // Assigned during construction only (the constructor's helper methods set them): coefficients in the
     // order of Coefficients; θ and the upper-triangular R⁻¹ of the √w-scaled design in the basis z(x) (see
@@ -53,6 +55,9 @@ public sealed class RegressionFit
     private readonly double _weightScale;
     private readonly double _weightNormaliser;
 
+    // Whether the straight line needed a refinement pass (always true for the QR path, which refines).
+    private readonly bool _refined = true;
+
     // Residual statistics and list views, computed on first use (benign race: every thread computes the same
     // values; the flag or reference is published last).
     private int _statisticsReady;
@@ -62,124 +67,80 @@ public sealed class RegressionFit
     // t((1 + 0.95)/2, n − p), computed on first use; 0 until then.
     private double _t95;
 
-    // x, y and raw weights w already multiplied by weightScale (an exact power of 2); sw, swx, swy: Σw, Σw·x,
-    // Σw·y of those weights; minX, maxX: the x range.
-    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double[] w, int n, double minX, double maxX, double weightScale, double sw, double swx, double swy)
+    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double minX, double maxX)
     {
         Model = model;
         Weighting = weighting;
         _x = x;
         _y = y;
-        _w = w;
-        Count = n;
+        Count = x.Length;
         MinX = minX;
         MaxX = maxX;
         ParameterCount = model == CalibrationModel.Quadratic ? 3 : model == CalibrationModel.Linear ? 2 : 1;
-        DegreesOfFreedom = n - ParameterCount;
-
-        // Normalised weights, Σw = n (applied in the model's next pass).
-        _weightScale = weightScale;
-        _weightNormaliser = weighting.Scheme == WeightingScheme.None ? 1.0 : n / sw;
-        double meanX = swx / sw, meanY = swy / sw;
-        switch (model)
-        {
-            case CalibrationModel.Linear:
-                FitLine(meanX, meanY);
-                break;
-            case CalibrationModel.LinearThroughOrigin:
-                FitThroughOrigin(meanX, meanY);
-                break;
-            default:
-                NormaliseWeights();
-                FitQr();
-                break;
-        }
+        DegreesOfFreedom = Count - ParameterCount;
     }
 
-    /// <summary>
-    /// Straight line from weighted sums centred at the provisional means c, m, with the correction terms of
-    /// the corrected two-pass algorithm (Chan, Golub &amp; LeVeque, "Algorithms for computing the sample
-    /// variance", Am. Stat. 37 (1983)); the intercept ȳw − b·x̄w is formed with compensated arithmetic. Falls back
-    /// to Householder QR if a sum overflows or underflows.
-    /// </summary>
-    private void FitLine(double c, double m)
+    /// <summary>A straight line from the shared kernel (<see cref="LineFitKernel"/>); x and y are the fitted copies.</summary>
+    private RegressionFit(double[] x, double[] y, in LineFit line)
+        : this(CalibrationModel.Linear, line.Weighting, x, y, line.MinX, line.MaxX)
     {
-        double[] xs = _x, ys = _y, ws = _w;
-        int n = Count;
-        double k = _weightNormaliser;
-        double sw = 0, sdx = 0, sdy = 0, sxxAboutC = 0, sxy = 0;
-        for (int i = 0; i < n; i++)
-        {
-            double w = ws[i] *= k;
-            double dx = xs[i] - c, dy = ys[i] - m, wdx = w * dx;
-            sw += w;
-            sdx += wdx;
-            sdy += w * dy;
-            sxxAboutC += wdx * dx;
-            sxy += wdx * dy;
-        }
+        _weightScale = line.WeightScale;
+        _weightNormaliser = line.WeightNormaliser;
+        _refined = line.IsRefined;
+        _beta0 = line.Intercept;
+        _beta1 = line.Slope;
+        _meanX = line.WeightedMeanX;
+        _meanY = line.WeightedMeanY;
 
-        double shiftX = sdx / sw, shiftY = sdy / sw;
-        double sxx = sxxAboutC - (sdx * shiftX);
-        double scale = Math.Sqrt(sxx / sw);
-        double b = (sxy - (sdx * shiftY)) / sxx;
-        if (!(scale > 0) || double.IsInfinity(sxxAboutC) || double.IsNaN(b) || double.IsInfinity(b))
-        {
-            FitQr();
-            return;
-        }
-
-        // One step of iterative refinement in closed form: residuals about the provisional line ŷ − m =
-        // α + b·(x − c) with x − c and y − m split exactly (TwoSum) and b·(x − c) taken exactly (TwoProduct),
-        // so each residual carries one rounding; their least-squares correction (δα, δb) is added to the intercept
-        // unrounded. This keeps the intercept accurate when |b·x̄w| ≫ |a| (the usual calibration case).
-        double alpha = shiftY - (b * shiftX), swr = 0, swdxr = 0;
-        for (int i = 0; i < n; i++)
-        {
-            double x = xs[i], y = ys[i];
-            double dx = x - c, dy = y - m, bdx = b * dx;
-            double r = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
-                + CompensatedSum.SumError(y, -m, dy) - (b * CompensatedSum.SumError(x, -c, dx)) - alpha;
-            double wr = ws[i] * r;
-            swr += wr;
-            swdxr += wr * dx;
-        }
-
-        double deltaB = (swdxr - (shiftX * swr)) / sxx;
-        double deltaAlpha = (swr / sw) - (shiftX * deltaB);
-        _meanX = c + shiftX;
-        _meanY = m + shiftY;
-        var a = default(CompensatedSum);
-        a.Add(m);
-        a.Add(alpha + deltaAlpha);
-        a.AddProduct(-b, c);
-        a.Add(-deltaB * c);
-        _beta0 = a.Value;
-        b += deltaB;
-        _beta1 = b;
-
-        // Basis (1, u), u = (x − x̄w)/s with s² = Sxx,w/Σw: the design is orthogonal and R = √Σw·I.
+        // Basis (1, u), u = (x − x̄w)/s with s² = Sxx,w/Σw, Σw = n: the design is orthogonal and R = √n·I.
+        _sxx = line.WeightedSumOfSquaresX;
         _center = _meanX;
-        _scale = scale;
-        _sxx = sxx;
+        _scale = Math.Sqrt(_sxx / Count);
         var theta0 = default(CompensatedSum);
         theta0.Add(_beta0);
-        theta0.AddProduct(b, _center);
+        theta0.AddProduct(_beta1, _center);
         _theta0 = theta0.Value;
-        _theta1 = b * scale;
-        _r00 = _r11 = 1 / Math.Sqrt(sw);
+        _theta1 = _beta1 * _scale;
+        _r00 = _r11 = 1 / Math.Sqrt(Count);
+    }
+
+    /// <summary>Line through the origin, quadratic, or a straight line the kernel could not fit (QR); data checked,
+    /// raw weights scaled by <paramref name="weightScale"/> (a power of 2).</summary>
+    private RegressionFit(CalibrationModel model, Weighting weighting, double[] x, double[] y, double minX, double maxX, double weightScale)
+        : this(model, weighting, x, y, minX, maxX)
+    {
+        int n = Count;
+        double sw = 0, swx = 0, swy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double w = weighting.PointWeightOrNaN(i, x[i], y[i]) * weightScale;
+            sw += w;
+            swx += w * x[i];
+            swy += w * y[i];
+        }
+
+        // Normalised weights, Σw = n (see W).
+        _weightScale = weightScale;
+        _weightNormaliser = weighting.Scheme == WeightingScheme.None ? 1.0 : n / sw;
+        if (model == CalibrationModel.LinearThroughOrigin)
+        {
+            FitThroughOrigin(swx / sw, swy / sw);
+        }
+        else
+        {
+            FitQr();
+        }
     }
 
     /// <summary>Line through the origin, b = Σw·x·y/Σw·x²; falls back to Householder QR if a sum overflows or underflows.</summary>
     private void FitThroughOrigin(double c, double m)
     {
-        double[] xs = _x, ys = _y, ws = _w;
+        double[] xs = _x, ys = _y;
         int n = Count;
-        double k = _weightNormaliser;
         double sw = 0, sdx = 0, sdy = 0, sxx = 0, sxy = 0;
         for (int i = 0; i < n; i++)
         {
-            double w = ws[i] *= k;
+            double w = W(i);
             double x = xs[i], y = ys[i], wx = w * x;
             sw += w;
             sdx += w * (x - c);
@@ -206,14 +167,8 @@ public sealed class RegressionFit
         _r00 = 1 / Math.Sqrt(sw);
     }
 
-    private void NormaliseWeights()
-    {
-        int n = Count;
-        for (int i = 0; i < n; i++)
-        {
-            _w[i] *= _weightNormaliser;
-        }
-    }
+    /// <summary>Normalised weight of standard <paramref name="i"/> (Σw = n; 1 when unweighted).</summary>
+    private double W(int i) => Weighting.PointWeightOrNaN(i, _x[i], _y[i]) * _weightScale * _weightNormaliser;
 
     /// <summary>
     /// General fit for every model: the √w-scaled design in the basis z(x) solved by Householder QR, transformed
@@ -222,7 +177,13 @@ public sealed class RegressionFit
     private void FitQr()
     {
         int n = Count, p = ParameterCount;
-        double[] x = _x, y = _y, weights = _w;
+        double[] x = _x, y = _y;
+        var weights = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            weights[i] = W(i);
+        }
+
         _meanX = WeightedMean(x, weights);
         _meanY = WeightedMean(y, weights);
         _center = Model == CalibrationModel.LinearThroughOrigin ? 0.0 : _meanX;
@@ -279,7 +240,7 @@ public sealed class RegressionFit
             }
         }
 
-        Refine(theta, beta);
+        Refine(theta, beta, weights);
         SetTheta(theta);
         SetBeta(beta);
     }
@@ -394,10 +355,16 @@ public sealed class RegressionFit
     public static RegressionFit Fit(IReadOnlyList<double> x, IReadOnlyList<double> y, CalibrationModel model, Weighting? weighting = null)
     {
         weighting ??= Weighting.None;
-        if (model is CalibrationModel.Linear or CalibrationModel.LinearThroughOrigin && x is double[] xa && y is double[] ya && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length)
-            && TryFitLineFast(xa, ya, model, weighting) is RegressionFit fast)
+        if (model == CalibrationModel.Linear && x is double[] xa && y is double[] ya && xa.Length == ya.Length && xa.Length >= 3
+            && (!weighting.IsPerPoint || weighting.PointValues.Count == xa.Length))
         {
-            return fast;
+            // Copies (the fit keeps them) and one checked pass of the shared kernel; anything unusual goes on below.
+            var xc = (double[])xa.Clone();
+            var yc = (double[])ya.Clone();
+            if (LineFitKernel.TryFit(xc, yc, weighting, 1.0, out LineFit fast))
+            {
+                return new RegressionFit(xc, yc, fast);
+            }
         }
 
         Guard.NotNull(x, nameof(x));
@@ -455,82 +422,64 @@ public sealed class RegressionFit
         }
 
         // Raw weights (checked), their maximum and the x range in one pass.
-        var ws = new double[n];
         double maxRawWeight = 0, minX = double.PositiveInfinity, maxX = double.NegativeInfinity;
         for (int i = 0; i < n; i++)
         {
             double xi = xs[i];
-            double w = ws[i] = weighting.PointWeight(i, xi, ys[i]);
-            maxRawWeight = Math.Max(maxRawWeight, w);
+            maxRawWeight = Math.Max(maxRawWeight, weighting.PointWeight(i, xi, ys[i]));
             minX = Math.Min(minX, xi);
             maxX = Math.Max(maxX, xi);
         }
 
         // Weights scaled exactly by the power of 2 that brings the largest into [1, 2): the sums cannot overflow.
         double scale = weighting.Scheme == WeightingScheme.None ? 1.0 : PowerOfTwoScale(maxRawWeight);
-        double sw = 0, swx = 0, swy = 0;
-        for (int i = 0; i < n; i++)
+        if (model == CalibrationModel.Linear && LineFitKernel.TryFit(xs, ys, weighting, scale, out LineFit line))
         {
-            double w = ws[i] *= scale;
-            sw += w;
-            swx += w * xs[i];
-            swy += w * ys[i];
+            return new RegressionFit(xs, ys, line);
         }
 
-        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, scale, sw, swx, swy);
+        return new RegressionFit(model, weighting, xs, ys, minX, maxX, scale);
     }
 
     /// <summary>
-    /// One pass for straight lines given as arrays: copies x, y and the raw weights, checks them and forms Σw, Σw·x,
-    /// Σw·y. Returns null on anything unusual (a non-finite value, an undefined weight, all x equal, a sum out of
-    /// the safe range) so that the caller takes the checked path, which reports it. Raw weights are not scaled:
-    /// scaling by a power of 2 is exact, so the sums are those of the scaled path whenever they stay in range.
+    /// Fits the straight line y = a + b·x by weighted least squares without copying the data or allocating:
+    /// the same numbers as <see cref="Fit"/> with <see cref="CalibrationModel.Linear"/>, bit for bit (both use
+    /// one computation), returned as a <see cref="LineFit"/> value.
     /// </summary>
-    private static RegressionFit? TryFitLineFast(double[] x, double[] y, CalibrationModel model, Weighting weighting)
+    /// <remarks>
+    /// <para>One pass checks every value and forms weighted sums about the first point (weights computed per
+    /// point); a second pass about the means, and a refinement pass on residuals split exactly
+    /// (TwoSum/TwoProduct), run only when a first-order rounding-error bound of the coefficients exceeds 2⁻⁴⁰
+    /// relative (at least 12 correct significant digits, the NIST StRD accuracy this library is tested to; see
+    /// <see cref="LineFit.IsRefined"/>). Formulas: Miller &amp; Miller, "Statistics and Chemometrics for Analytical
+    /// Chemistry", ch. 5; weighted form Harvey, "Modern Analytical Chemistry", eqs 5.23–5.24.</para>
+    /// <para>Allocates nothing for valid data whose weighted sums stay within 1e-100…1e100 (Σw) and finite; other
+    /// data (and invalid data, to report it) go through <see cref="Fit"/> on copies, with exactly scaled weights or
+    /// Householder QR.</para>
+    /// </remarks>
+    /// <param name="x">Concentrations (or concentration ratios) of the standards; finite, at least 2 distinct.</param>
+    /// <param name="y">Responses (or response ratios); finite, same length as x (at least 3 points).</param>
+    /// <param name="weighting">Weighting; null means <see cref="Weighting.None"/>. Per-point weightings must hold
+    /// one value per point.</param>
+    /// <returns>The fitted line.</returns>
+    /// <exception cref="ArgumentException">Lengths differ; a value is NaN or infinite (the message names the
+    /// parameter, index and value); fewer than 3 points or 2 distinct x; a per-point weighting has the wrong count;
+    /// the weighting is undefined at a point (e.g. 1/x at x ≤ 0); or the x values are numerically degenerate.</exception>
+    public static LineFit FitLine(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Weighting? weighting = null)
     {
-        int n = x.Length;
-        if (y.Length != n || n < (model == CalibrationModel.Linear ? 3 : 2))
+        weighting ??= Weighting.None;
+        if (x.Length == y.Length && x.Length >= 3 && (!weighting.IsPerPoint || weighting.PointValues.Count == x.Length)
+            && LineFitKernel.TryFit(x, y, weighting, 1.0, out LineFit line))
         {
-            return null;
+            return line;
         }
 
-        var xs = new double[n];
-        var ys = new double[n];
-        var ws = new double[n];
-        double x0 = x[0], minX = x0, maxX = x0, sw = 0, swx = 0, swy = 0;
-        WeightingScheme scheme = weighting.Scheme;
-        for (int i = 0; i < n; i++)
-        {
-            double xi = x[i], yi = y[i];
-
-            // The common schemes inline (no call in the loop); 1/x at x ≤ 0 gives a weight ≤ 0 or ∞, refused below.
-            double w = scheme == WeightingScheme.None ? 1.0
-                : scheme == WeightingScheme.InverseX ? 1.0 / xi
-                : weighting.PointWeightOrNaN(i, xi, yi);
-
-            // x − x is 0 exactly for finite x, NaN for NaN and ±∞; w must also be > 0.
-            if (!((xi - xi) + (yi - yi) + (w - w) == 0 && w > 0))
-            {
-                return null;
-            }
-
-            xs[i] = xi;
-            ys[i] = yi;
-            ws[i] = w;
-            minX = xi < minX ? xi : minX;
-            maxX = xi > maxX ? xi : maxX;
-            sw += w;
-            swx += w * xi;
-            swy += w * yi;
-        }
-
-        if (minX == maxX || !((swx - swx) + (swy - swy) == 0 && sw > 1e-100 && sw < 1e100))
-        {
-            return null;
-        }
-
-        return new RegressionFit(model, weighting, xs, ys, ws, n, minX, maxX, 1.0, sw, swx, swy);
+        return Fit(x.ToArray(), y.ToArray(), CalibrationModel.Linear, weighting).ToLineFit();
     }
+
+    /// <summary>This straight-line fit as a <see cref="LineFit"/> (the same numbers).</summary>
+    internal LineFit ToLineFit() =>
+        new(Weighting, Count, _weightScale, _weightNormaliser, _meanX, _meanY, _sxx, _beta0, _beta1, MinX, MaxX, _refined);
 
     /// <summary>Covariance of two coefficients, s²·(XᵀWX)⁻¹ in the order of <see cref="Coefficients"/>.</summary>
     /// <param name="i">Index of the first coefficient, 0 ≤ i &lt; <see cref="ParameterCount"/>.</param>
@@ -810,7 +759,7 @@ public sealed class RegressionFit
     /// Björck, "Numerical Methods for Least Squares Problems", §2.5). Removes the rounding error that the
     /// back-transformation from the centred basis leaves in the intercept. Updates θ and β in place.
     /// </summary>
-    private void Refine(double[] theta, double[] beta)
+    private void Refine(double[] theta, double[] beta, double[] weights)
     {
         SetBeta(beta);
         int n = Count, p = ParameterCount;
@@ -823,7 +772,7 @@ public sealed class RegressionFit
             Basis(xi, z);
             for (int j = 0; j < p; j++)
             {
-                g[j] += _w[i] * z[j] * r;
+                g[j] += weights[i] * z[j] * r;
             }
         }
 
@@ -891,9 +840,7 @@ public sealed class RegressionFit
                 sum.AddProduct(-_beta0, x);
                 break;
             case CalibrationModel.Linear:
-                sum.Add(-_beta0);
-                sum.AddProduct(-_beta1, x);
-                break;
+                return LineFit.Residual(_beta0, _beta1, x, y);
             default:
                 sum.Add(-_beta0);
                 sum.AddProduct(-_beta1, x);
@@ -1011,13 +958,20 @@ public sealed class RegressionFit
         int n = Count;
         bool origin = Model == CalibrationModel.LinearThroughOrigin;
         double rss = 0, total = 0;
-        for (int i = 0; i < n; i++)
+        if (Model == CalibrationModel.Linear)
         {
-            double x = _x[i], y = _y[i], w = _w[i];
-            double weighted = Math.Sqrt(w) * CompensatedResidual(x, y);
-            rss += weighted * weighted;
-            double d = origin ? y : y - _meanY;
-            total += w * d * d;
+            ToLineFit().ResidualSums(_x, _y, out rss, out total);
+        }
+        else
+        {
+            for (int i = 0; i < n; i++)
+            {
+                double x = _x[i], y = _y[i], w = W(i);
+                double weighted = Math.Sqrt(w) * CompensatedResidual(x, y);
+                rss += weighted * weighted;
+                double d = origin ? y : y - _meanY;
+                total += w * d * d;
+            }
         }
 
         _residualSumOfSquares = rss;
@@ -1211,7 +1165,7 @@ public sealed class RegressionFit
         for (int i = 0; i < n; i++)
         {
             double d = _x[i] - center;
-            sum += _w[i] * d * d;
+            sum += W(i) * d * d;
         }
 
         return sum;
@@ -1346,7 +1300,12 @@ public sealed class RegressionFit
             int n = fit.Count, p = fit.ParameterCount;
             var x = (double[])fit._x.Clone();
             var y = (double[])fit._y.Clone();
-            var weights = (double[])fit._w.Clone();
+            var weights = new double[n];
+            for (int i = 0; i < n; i++)
+            {
+                weights[i] = fit.W(i);
+            }
+
             var coefficients = new double[p];
             var standardErrors = new double[p];
             for (int i = 0; i < p; i++)

@@ -163,6 +163,9 @@ public sealed class Weighting : IEquatable<Weighting>
     public override string ToString() =>
         IsPerPoint ? string.Format(CultureInfo.InvariantCulture, "{0} ({1} values)", Name, _values.Length) : Name;
 
+    /// <summary>The per-point values as stored (not copied): standard deviations (1/s²) or weights (custom).</summary>
+    internal double[] Values => _values;
+
     /// <summary>Raw weight of standard <paramref name="index"/> (any scheme), or NaN where the scheme is undefined
     /// (the caller checks finite and &gt; 0; <see cref="PointWeight"/> gives the message).</summary>
     internal double PointWeightOrNaN(int index, double x, double y) => Scheme switch
