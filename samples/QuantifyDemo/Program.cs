@@ -1,5 +1,5 @@
 // Demo: quantify an analytical run end to end. Reads the invented river-water run file, processes it with a method
-// set up in code, prints the results with their flags and writes them as JSON and CSV.
+// set up in code, prints the results with their flags and writes them as JSON and CSV, an HTML run report and SVG plots.
 // Usage: dotnet run --project samples/QuantifyDemo [output-folder] [run-file.csv]
 using System;
 using System.Collections.Generic;
@@ -10,6 +10,7 @@ using InternalStdCal.Calibration;
 using InternalStdCal.IO;
 using InternalStdCal.Limits;
 using InternalStdCal.Quantities;
+using InternalStdCal.Reporting;
 using InternalStdCal.Run;
 using InternalStdCal.Uncertainty;
 
@@ -19,6 +20,7 @@ namespace InternalStdCal.Samples;
 internal static class QuantifyDemo
 {
     private static readonly string RunFile = Path.Combine("samples", "data", "river-water-run.csv");
+    private static readonly string[] BudgetSamples = { "RW-02" };
 
     private static int Main(string[] args) => Run(args, Console.Out);
 
@@ -129,10 +131,22 @@ internal static class QuantifyDemo
         string csv = Path.Combine(outputFolder, read.Run.Name + "-results.csv");
         RunResultsJson.WriteFile(results, json);
         RunResultsCsv.WriteFile(results, csv);
+
+        // 8. The run report for people (one self-contained HTML file) and two plots as SVG files.
+        string html = Path.Combine(outputFolder, "run-report.html");
+        var reportOptions = new RunHtmlReportOptions { Title = "River-water survey: run report", UncertaintyBudgetSamples = BudgetSamples };
+        File.WriteAllText(html, RunHtmlReport.Render(report, reportOptions));
+        string curve = Path.Combine(outputFolder, "calibration-curve-Cd-111.svg");
+        PlotExport.SaveSvg(CalibrationPlots.Curve(report.Calibrations.Single(c => c.Analyte == "Cd-111").Calibration!, method.ConfidenceLevel, "Calibration curve: Cd-111"), curve);
+        string recovery = Path.Combine(outputFolder, "is-recovery-Rh-103.svg");
+        PlotExport.SaveSvg(RunPlots.InternalStandardRecovery(report, "Rh-103"), recovery);
         output.WriteLine();
         output.WriteLine("Written:");
         output.WriteLine($"  {json}");
         output.WriteLine($"  {csv}");
+        output.WriteLine($"  {html}");
+        output.WriteLine($"  {curve}");
+        output.WriteLine($"  {recovery}");
         output.WriteLine();
         output.WriteLine("The library computes; the lab's validated method, its QA system, local regulations and licensed practice decide.");
         return 0;
