@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using System.Threading;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
 using InternalStdCal.Limits;
@@ -183,14 +184,18 @@ public static class RunProcessor
         }
     }
 
-    private sealed class ResultBuilder
+    // One sample × analyte while the run is processed; afterwards the source of the result's quantitation, sample
+    // calculation and notes, which are built only when asked for.
+    private sealed class ResultBuilder : AnalyteResult.IResultSource
     {
-        internal ResultBuilder(string id, InjectionRole role, string analyte, IReadOnlyList<RunInjection> rows)
+        internal ResultBuilder(string id, InjectionRole role, string analyte, IReadOnlyList<RunInjection> rows, IReadOnlyList<int> orders)
         {
             Id = id;
             Role = role;
             Analyte = analyte;
             Rows = rows;
+            Orders = orders;
+            Notes = new NoteList(this);
         }
 
         internal string Id { get; }
@@ -201,22 +206,109 @@ public static class RunProcessor
 
         internal IReadOnlyList<RunInjection> Rows { get; }
 
-        internal QuantitationResult? Quantitation { get; set; }
+        internal IReadOnlyList<int> Orders { get; }
 
-        internal SampleResult? InSample { get; set; }
-
-        internal Concentration? SampleLower { get; set; }
-
-        internal Concentration? SampleUpper { get; set; }
-
-        internal ReportedValue? Reported { get; set; }
+        internal NoteList Notes { get; }
 
         internal ResultQualifiers Qualifiers { get; set; }
 
-        internal List<string> Notes { get; } = new();
+        // What SampleQuantitation.Quantify is called with (again) when the quantitation is asked for.
+        internal RatioCalibration? Calibration { get; private set; }
+
+        internal UnknownSample? Sample { get; private set; }
+
+        internal RunMethod? Method { get; private set; }
+
+        internal List<RunInjection>? Used { get; private set; }
+
+        internal QuantitationEstimate? Estimate { get; private set; }
+
+        internal SamplePreparation? Preparation { get; private set; }
+
+        internal Concentration? InSample { get; private set; }
+
+        internal Concentration? SampleLower { get; private set; }
+
+        internal Concentration? SampleUpper { get; private set; }
+
+        internal ReportedValue? Reported { get; set; }
+
+        internal void Quantified(RatioCalibration calibration, UnknownSample sample, RunMethod method, List<RunInjection> used, QuantitationEstimate estimate)
+        {
+            Calibration = calibration;
+            Sample = sample;
+            Method = method;
+            Used = used;
+            Estimate = estimate;
+        }
+
+        internal void InOriginalSample(SamplePreparation preparation, Concentration value, Concentration? lower, Concentration? upper)
+        {
+            Preparation = preparation;
+            InSample = value;
+            SampleLower = lower;
+            SampleUpper = upper;
+        }
+
+        public QuantitationResult? Quantitation() =>
+            Estimate is null ? null : SampleQuantitation.Quantify(Calibration!, Sample!, Method!.ConfidenceLevel, Method.IntervalMethod);
+
+        public SampleResult? SampleCalculation(QuantitationResult quantitation) =>
+            InSample is null ? null : Preparation!.ToSample(quantitation.AsMeasured() ?? Measured.Exact(quantitation.Concentration));
 
         internal AnalyteResult Build() =>
-            new(Id, Role, Analyte, Rows.Select(r => r.Order).ToList(), Quantitation, InSample, SampleLower, SampleUpper, Reported, Qualifiers, Notes.ToList());
+            new(Id, Role, Analyte, Orders, Estimate?.Concentration, Estimate?.Lower, Estimate?.Upper, SampleLower, SampleUpper, Reported, Qualifiers, Notes, Estimate is null ? null : this);
+
+        internal string UsedInjectionsNote()
+        {
+            QuantitationEstimate q = Estimate!.Value;
+            return "Injections used: " + string.Join(", ", Used!.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(q.MeanResponse) + " → " + q.Concentration.ToString("G6", null) + " in the measured solution.";
+        }
+
+        internal string OriginalSampleNote() => "Original sample: " + Preparation + " → " + InSample!.Value.ToString("G6", null) + ".";
+    }
+
+    // The notes of a result in order; the two every quantified result has are formatted on first read (thread-safe).
+    private sealed class NoteList : IReadOnlyList<string>
+    {
+        private readonly ResultBuilder _owner;
+        private readonly List<(string? Text, bool OriginalSample)> _entries = new(2);
+        private string[]? _texts;
+
+        internal NoteList(ResultBuilder owner) => _owner = owner;
+
+        public int Count => _entries.Count;
+
+        public string this[int index] => Texts()[index];
+
+        internal void Add(string text) => _entries.Add((text, false));
+
+        // "Injections used: …" (text null, false) and "Original sample: …" (text null, true).
+        internal void AddUsedInjections() => _entries.Add((null, false));
+
+        internal void AddOriginalSample() => _entries.Add((null, true));
+
+        public IEnumerator<string> GetEnumerator() => ((IEnumerable<string>)Texts()).GetEnumerator();
+
+        System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+
+        private string[] Texts()
+        {
+            string[]? texts = Volatile.Read(ref _texts);
+            if (texts is null)
+            {
+                texts = new string[_entries.Count];
+                for (int i = 0; i < texts.Length; i++)
+                {
+                    (string? text, bool originalSample) = _entries[i];
+                    texts[i] = text ?? (originalSample ? _owner.OriginalSampleNote() : _owner.UsedInjectionsNote());
+                }
+
+                texts = Interlocked.CompareExchange(ref _texts, texts, null) ?? texts;
+            }
+
+            return texts;
+        }
     }
 
     private sealed class State
@@ -226,6 +318,7 @@ public static class RunProcessor
         private readonly Dictionary<int, RowState> _rows = new();
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
         private readonly List<RunInjection[]> _samples;
+        private readonly List<IReadOnlyList<int>> _sampleOrders;
 
         internal State(AnalyticalRun run, RunMethod method)
         {
@@ -238,6 +331,7 @@ public static class RunProcessor
 
             // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
             _samples = run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
+            _sampleOrders = _samples.Select(g => (IReadOnlyList<int>)Array.AsReadOnly(g.Select(r => r.Order).ToArray())).ToList();
         }
 
         internal IReadOnlyDictionary<string, double?> References => _references;
@@ -439,11 +533,12 @@ public static class RunProcessor
         internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
         {
             var list = new List<ResultBuilder>(_samples.Count);
-            foreach (RunInjection[] g in _samples)
+            for (int i = 0; i < _samples.Count; i++)
             {
-                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g);
+                RunInjection[] g = _samples[i];
+                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g, _sampleOrders[i]);
                 Quantify(a, cal, b, InjectionStatus.Quantified);
-                if (b.Quantitation is QuantitationResult q)
+                if (b.Estimate is QuantitationEstimate q)
                 {
                     ToSample(b, q);
                     ApplyLimits(a, b);
@@ -467,10 +562,10 @@ public static class RunProcessor
                     continue;
                 }
 
-                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r });
+                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r }, Array.Empty<int>());
                 Quantify(a, cal, b, InjectionStatus.QualityControlEvaluated);
                 double? recovery = null;
-                if (b.Quantitation is QuantitationResult q)
+                if (b.Estimate is QuantitationEstimate q)
                 {
                     if (nominal.Kind == q.Concentration.Kind)
                     {
@@ -488,7 +583,7 @@ public static class RunProcessor
                     _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
                 }
 
-                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Quantitation?.Concentration, recovery, window, passed, b.Notes.ToList()));
+                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Estimate?.Concentration, recovery, window, passed, b.Notes));
             }
 
             return checks;
@@ -510,8 +605,8 @@ public static class RunProcessor
         private static DuplicateCheck Duplicate(string analyte, ResultBuilder parent, ResultBuilder dup, RpdLimit? limit)
         {
             var notes = new List<string>();
-            Concentration? a = parent.InSample?.Result.Value;
-            Concentration? b = dup.InSample?.Result.Value;
+            Concentration? a = parent.InSample;
+            Concentration? b = dup.InSample;
             double? rpd = null;
             if (a is Concentration x && b is Concentration y)
             {
@@ -556,8 +651,8 @@ public static class RunProcessor
         private static SpikeCheck Spike(string analyte, ResultBuilder parent, ResultBuilder spiked, Concentration added, RecoveryWindow? window)
         {
             var notes = new List<string>();
-            Concentration? s = spiked.InSample?.Result.Value;
-            Concentration? u = parent.InSample?.Result.Value;
+            Concentration? s = spiked.InSample;
+            Concentration? u = parent.InSample;
             double? recovery = null;
             if (s is Concentration x && u is Concentration y)
             {
@@ -666,12 +761,11 @@ public static class RunProcessor
         // Limits are the method's LOD/LOQ in the original sample (common practice), so they judge InSample.
         private static void ApplyLimits(AnalyteMethod a, ResultBuilder b)
         {
-            if (b.InSample is not SampleResult inSample)
+            if (b.InSample is not Concentration c)
             {
                 return;
             }
 
-            Concentration c = inSample.Result.Value;
             if (a.Limits is not ReportingLimits limits)
             {
                 b.Reported = new ReportedValue(c, ReportedStatus.Quantified, null);
@@ -698,20 +792,22 @@ public static class RunProcessor
             }
         }
 
-        private static void ToSample(ResultBuilder b, QuantitationResult q)
+        // The value and the interval ends carried back without uncertainty budgets (built when the result is asked for one).
+        private static void ToSample(ResultBuilder b, QuantitationEstimate q)
         {
             SamplePreparation prep = b.Rows[0].Preparation;
-            Measured<Concentration> measured = q.AsMeasured() ?? Measured.Exact(q.Concentration);
             try
             {
-                b.InSample = prep.ToSample(measured);
+                Concentration value = prep.ToSampleValue(q.Concentration);
+                Concentration? lower = null, upper = null;
                 if (q.Lower is Concentration lo && q.Upper is Concentration hi)
                 {
-                    b.SampleLower = prep.ToSample(Measured.Exact(lo)).Result.Value;
-                    b.SampleUpper = prep.ToSample(Measured.Exact(hi)).Result.Value;
+                    lower = prep.ToSampleValue(lo);
+                    upper = prep.ToSampleValue(hi);
                 }
 
-                b.Notes.Add("Original sample: " + prep + " → " + b.InSample.Result.Value.ToString("G6", null) + ".");
+                b.InOriginalSample(prep, value, lower, upper);
+                b.Notes.AddOriginalSample();
             }
             catch (ArgumentException e)
             {
@@ -782,7 +878,8 @@ public static class RunProcessor
             Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
             try
             {
-                b.Quantitation = SampleQuantitation.Quantify(calibration, UnknownSample.Create(b.Id, cIs, injections.ToArray()), _method.ConfidenceLevel, _method.IntervalMethod);
+                UnknownSample sample = UnknownSample.Create(b.Id, cIs, injections.ToArray());
+                b.Quantified(calibration, sample, _method, used, SampleQuantitation.Estimate(calibration, sample, _method.ConfidenceLevel, _method.IntervalMethod));
             }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException)
             {
@@ -796,8 +893,8 @@ public static class RunProcessor
                 return;
             }
 
-            b.Notes.Add("Injections used: " + string.Join(", ", used.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(b.Quantitation.MeanResponse) + " → " + b.Quantitation.Concentration.ToString("G6", null) + " in the measured solution.");
-            if (b.Quantitation.IsExtrapolated)
+            b.Notes.AddUsedInjections();
+            if (b.Estimate!.Value.IsExtrapolated)
             {
                 b.Qualifiers |= ResultQualifiers.Extrapolated;
             }
