@@ -78,5 +78,18 @@ public sealed class UnknownSample
     public IReadOnlyList<Injection> Injections => _injections;
 
     /// <summary>Mean response ratio analyte/IS of the injections.</summary>
-    public double MeanResponse => _injections.Average(i => i.Ratio);
+    public double MeanResponse
+    {
+        get
+        {
+            // Summed in order from the first ratio, then divided by the count (as Enumerable.Average), without allocating.
+            double sum = _injections[0].Ratio;
+            for (int i = 1; i < _injections.Length; i++)
+            {
+                sum += _injections[i].Ratio;
+            }
+
+            return sum / _injections.Length;
+        }
+    }
 }

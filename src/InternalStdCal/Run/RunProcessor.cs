@@ -161,25 +161,47 @@ public static class RunProcessor
 
     private sealed class RowState
     {
-        internal RowState(RunInjection row)
+        internal RowState(RunInjection row, Dictionary<string, int> analytes, IReadOnlyList<string> internalStandards)
         {
             Row = row;
+            Statuses = new InjectionStatus?[analytes.Count];
+            AnalyteSignals = new double[analytes.Count];
+            AnalyteSignals.AsSpan().Fill(double.NaN);
+            foreach (KeyValuePair<string, double> signal in row.Signals.Analytes)
+            {
+                if (analytes.TryGetValue(signal.Key, out int k))
+                {
+                    AnalyteSignals[k] = signal.Value;
+                }
+            }
+
+            InternalStandardSignals = new double[internalStandards.Count];
+            for (int k = 0; k < InternalStandardSignals.Length; k++)
+            {
+                InternalStandardSignals[k] = row.Signals.InternalStandard(internalStandards[k]) ?? double.NaN;
+            }
         }
 
         internal RunInjection Row { get; }
 
-        internal Dictionary<string, InjectionStatus> Statuses { get; } = new(StringComparer.Ordinal);
+        // By method analyte index; null = not used for that analyte (reported as excluded).
+        internal InjectionStatus?[] Statuses { get; }
+
+        // Signals by method analyte index and by run IS index, read once per run; NaN = not recorded (signals are finite).
+        internal double[] AnalyteSignals { get; }
+
+        internal double[] InternalStandardSignals { get; }
 
         internal List<string> Reasons { get; } = new();
 
         internal List<InternalStandardRecovery> Recoveries { get; } = new();
 
-        internal void Set(string analyte, InjectionStatus status, string? reason)
+        internal void Set(int analyte, string name, InjectionStatus status, string? reason)
         {
             Statuses[analyte] = status;
             if (reason is not null)
             {
-                Reasons.Add(analyte + ": " + reason);
+                Reasons.Add(name + ": " + reason);
             }
         }
     }
@@ -188,7 +210,7 @@ public static class RunProcessor
     // calculation and notes, which are built only when asked for.
     private sealed class ResultBuilder : AnalyteResult.IResultSource
     {
-        internal ResultBuilder(string id, InjectionRole role, string analyte, IReadOnlyList<RunInjection> rows, IReadOnlyList<int> orders)
+        internal ResultBuilder(string id, InjectionRole role, string analyte, RunInjection[] rows, IReadOnlyList<int> orders)
         {
             Id = id;
             Role = role;
@@ -204,7 +226,7 @@ public static class RunProcessor
 
         internal string Analyte { get; }
 
-        internal IReadOnlyList<RunInjection> Rows { get; }
+        internal RunInjection[] Rows { get; }
 
         internal IReadOnlyList<int> Orders { get; }
 
@@ -219,7 +241,7 @@ public static class RunProcessor
 
         internal RunMethod? Method { get; private set; }
 
-        internal List<RunInjection>? Used { get; private set; }
+        internal IReadOnlyList<RunInjection>? Used { get; private set; }
 
         internal QuantitationEstimate? Estimate { get; private set; }
 
@@ -233,7 +255,7 @@ public static class RunProcessor
 
         internal ReportedValue? Reported { get; set; }
 
-        internal void Quantified(RatioCalibration calibration, UnknownSample sample, RunMethod method, List<RunInjection> used, QuantitationEstimate estimate)
+        internal void Quantified(RatioCalibration calibration, UnknownSample sample, RunMethod method, IReadOnlyList<RunInjection> used, QuantitationEstimate estimate)
         {
             Calibration = calibration;
             Sample = sample;
@@ -272,32 +294,43 @@ public static class RunProcessor
     private sealed class NoteList : IReadOnlyList<string>
     {
         private readonly ResultBuilder _owner;
-        private readonly List<(string? Text, bool OriginalSample)> _entries = new(2);
+        private (string? Text, bool OriginalSample)[] _entries = new (string?, bool)[2];
+        private int _count;
         private string[]? _texts;
 
         internal NoteList(ResultBuilder owner) => _owner = owner;
 
-        public int Count => _entries.Count;
+        public int Count => _count;
 
         public string this[int index] => Texts()[index];
 
-        internal void Add(string text) => _entries.Add((text, false));
+        internal void Add(string text) => Append((text, false));
 
         // "Injections used: …" (text null, false) and "Original sample: …" (text null, true).
-        internal void AddUsedInjections() => _entries.Add((null, false));
+        internal void AddUsedInjections() => Append((null, false));
 
-        internal void AddOriginalSample() => _entries.Add((null, true));
+        internal void AddOriginalSample() => Append((null, true));
 
         public IEnumerator<string> GetEnumerator() => ((IEnumerable<string>)Texts()).GetEnumerator();
 
         System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+
+        private void Append((string?, bool) entry)
+        {
+            if (_count == _entries.Length)
+            {
+                Array.Resize(ref _entries, 2 * _count);
+            }
+
+            _entries[_count++] = entry;
+        }
 
         private string[] Texts()
         {
             string[]? texts = Volatile.Read(ref _texts);
             if (texts is null)
             {
-                texts = new string[_entries.Count];
+                texts = new string[_count];
                 for (int i = 0; i < texts.Length; i++)
                 {
                     (string? text, bool originalSample) = _entries[i];
@@ -319,14 +352,31 @@ public static class RunProcessor
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
         private readonly List<RunInjection[]> _samples;
         private readonly List<IReadOnlyList<int>> _sampleOrders;
+        private readonly Dictionary<string, int> _analyteIndex = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, int> _isIndex = new(StringComparer.Ordinal);
+        private readonly string[] _sortedAnalytes;
+        private readonly int[] _sortedToIndex;
 
         internal State(AnalyticalRun run, RunMethod method)
         {
             _run = run;
             _method = method;
+            for (int k = 0; k < method.Analytes.Count; k++)
+            {
+                _analyteIndex[method.Analytes[k].Analyte] = k;
+            }
+
+            for (int k = 0; k < run.InternalStandards.Count; k++)
+            {
+                _isIndex[run.InternalStandards[k]] = k;
+            }
+
+            _sortedAnalytes = _analyteIndex.Keys.ToArray();
+            Array.Sort(_sortedAnalytes, StringComparer.Ordinal);
+            _sortedToIndex = _sortedAnalytes.Select(n => _analyteIndex[n]).ToArray();
             foreach (RunInjection r in run.Injections)
             {
-                _rows[r.Order] = new RowState(r);
+                _rows[r.Order] = new RowState(r, _analyteIndex, run.InternalStandards);
             }
 
             // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
@@ -434,6 +484,7 @@ public static class RunProcessor
 
         internal AnalyteCalibration Calibrate(AnalyteMethod a)
         {
+            int ai = _analyteIndex[a.Analyte];
             Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
             RunInjection[] calRows = _run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank).ToArray();
             bool rf = a.Model is RatioModel.AverageResponseFactor or RatioModel.SinglePointResponseFactor;
@@ -452,7 +503,7 @@ public static class RunProcessor
                         string why = rf ? "calibration blank not used by a response-factor model." : "no calibration standard carries a nominal concentration of this analyte.";
                         foreach (RunInjection r in level)
                         {
-                            _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                            _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                         }
 
                         continue;
@@ -464,7 +515,7 @@ public static class RunProcessor
                 {
                     foreach (RunInjection r in level)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte in standard '" + r.Id + "'.");
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte in standard '" + r.Id + "'.");
                     }
 
                     continue;
@@ -473,7 +524,7 @@ public static class RunProcessor
                 {
                     foreach (RunInjection r in level)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "nominal 0 (blank) not used by a response-factor model.");
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "nominal 0 (blank) not used by a response-factor model.");
                     }
 
                     continue;
@@ -481,10 +532,10 @@ public static class RunProcessor
 
                 foreach (RunInjection r in level)
                 {
-                    (Injection? inj, string? why) = Signal(r, a);
+                    (Injection? inj, string? why) = Signal(_rows[r.Order], ai, a);
                     if (inj is null)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                         continue;
                     }
 
@@ -515,15 +566,15 @@ public static class RunProcessor
             {
                 if (calibration is null)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "the calibration could not be made: " + failure);
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "the calibration could not be made: " + failure);
                 }
                 else if (calibration.Standards.FirstOrDefault(s => s.Label == r.Id) is StandardResult s && !s.Included)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "blank left out of the fit by the calibration options (back-calculated for information).");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "blank left out of the fit by the calibration options (back-calculated for information).");
                 }
                 else
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.UsedInCalibration, NonPositive(r, a));
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.UsedInCalibration, NonPositive(_rows[r.Order].AnalyteSignals[ai]));
                 }
             }
 
@@ -532,12 +583,13 @@ public static class RunProcessor
 
         internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
         {
+            int ai = _analyteIndex[a.Analyte];
             var list = new List<ResultBuilder>(_samples.Count);
             for (int i = 0; i < _samples.Count; i++)
             {
                 RunInjection[] g = _samples[i];
                 var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g, _sampleOrders[i]);
-                Quantify(a, cal, b, InjectionStatus.Quantified);
+                Quantify(a, ai, cal, b, InjectionStatus.Quantified);
                 if (b.Estimate is QuantitationEstimate q)
                 {
                     ToSample(b, q);
@@ -552,18 +604,19 @@ public static class RunProcessor
 
         internal List<QualityControlCheck> QualityControl(AnalyteMethod a, AnalyteCalibration cal)
         {
+            int ai = _analyteIndex[a.Analyte];
             var checks = new List<QualityControlCheck>();
             RecoveryWindow? window = _method.QualityControlRecovery;
             foreach (RunInjection r in _run.Injections.Where(r => r.Role == InjectionRole.QualityControl))
             {
                 if (!r.Nominal.TryGetValue(a.Analyte, out Concentration nominal))
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
                     continue;
                 }
 
                 var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r }, Array.Empty<int>());
-                Quantify(a, cal, b, InjectionStatus.QualityControlEvaluated);
+                Quantify(a, ai, cal, b, InjectionStatus.QualityControlEvaluated);
                 double? recovery = null;
                 if (b.Estimate is QuantitationEstimate q)
                 {
@@ -589,18 +642,23 @@ public static class RunProcessor
             return checks;
         }
 
-        internal List<InjectionOutcome> Outcomes() =>
-            _run.Injections.Select(r =>
+        internal List<InjectionOutcome> Outcomes()
+        {
+            var outcomes = new List<InjectionOutcome>(_run.Injections.Count);
+            foreach (RunInjection r in _run.Injections)
             {
                 RowState st = _rows[r.Order];
-                var statuses = new SortedDictionary<string, InjectionStatus>(StringComparer.Ordinal);
-                foreach (AnalyteMethod a in _method.Analytes)
+                var statuses = new InjectionStatus[_sortedAnalytes.Length];
+                for (int k = 0; k < statuses.Length; k++)
                 {
-                    statuses[a.Analyte] = st.Statuses.TryGetValue(a.Analyte, out InjectionStatus s) ? s : InjectionStatus.Excluded;
+                    statuses[k] = st.Statuses[_sortedToIndex[k]] ?? InjectionStatus.Excluded;
                 }
 
-                return new InjectionOutcome(r, statuses, st.Recoveries.ToList(), st.Reasons.ToList());
-            }).ToList();
+                outcomes.Add(new InjectionOutcome(r, new AnalyteStatusMap(_sortedAnalytes, statuses), st.Recoveries.ToList(), st.Reasons.ToList()));
+            }
+
+            return outcomes;
+        }
 
         private static DuplicateCheck Duplicate(string analyte, ResultBuilder parent, ResultBuilder dup, RpdLimit? limit)
         {
@@ -699,31 +757,31 @@ public static class RunProcessor
         private static string OrderText(int order) =>
             order == int.MinValue ? "start of run" : order == int.MaxValue ? "end of run" : Text.I(order);
 
-        private static string? NonPositive(RunInjection r, AnalyteMethod a) =>
-            r.Signals.Analyte(a.Analyte) is double s && s <= 0 ? "analyte signal " + Text.G(s) + " ≤ 0 (used)." : null;
+        private static string? NonPositive(double signal) =>
+            signal <= 0 ? "analyte signal " + Text.G(signal) + " ≤ 0 (used)." : null;
 
-        private static (Injection? Injection, string? Reason) Signal(RunInjection r, AnalyteMethod a)
+        private (Injection? Injection, string? Reason) Signal(RowState st, int ai, AnalyteMethod a)
         {
-            double? signal = r.Signals.Analyte(a.Analyte);
-            double? isSignal = r.Signals.InternalStandard(a.InternalStandard);
-            if (signal is null)
+            double signal = st.AnalyteSignals[ai];
+            double isSignal = st.InternalStandardSignals[_isIndex[a.InternalStandard]];
+            if (double.IsNaN(signal))
             {
                 return (null, "no analyte signal; set aside.");
             }
 
-            if (isSignal is null)
+            if (double.IsNaN(isSignal))
             {
                 return (null, "no signal for IS " + a.InternalStandard + "; set aside.");
             }
 
-            if (!(isSignal.Value > 0))
+            if (!(isSignal > 0))
             {
-                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal.Value) + " ≤ 0 is invalid; set aside.");
+                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal) + " ≤ 0 is invalid; set aside.");
             }
 
             try
             {
-                return (new Injection(signal.Value, isSignal.Value), null);
+                return (new Injection(signal, isSignal), null);
             }
             catch (ArgumentOutOfRangeException e)
             {
@@ -816,7 +874,7 @@ public static class RunProcessor
         }
 
         // Grubbs' test on the ratios of ≥ 3 replicate injections: flags a suspect one, which stays in the mean.
-        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, List<RunInjection> used)
+        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, IReadOnlyList<RunInjection> used)
         {
             if (injections.Count < 3)
             {
@@ -837,24 +895,28 @@ public static class RunProcessor
             _rows[suspect.Order].Reasons.Add(a.Analyte + ": " + text);
         }
 
-        private void Quantify(AnalyteMethod a, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
+        private void Quantify(AnalyteMethod a, int ai, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
         {
-            var injections = new List<Injection>();
-            var used = new List<RunInjection>();
-            foreach (RunInjection r in b.Rows)
+            // Usually every row is valid: then the rows themselves are the rows used.
+            RunInjection[] rows = b.Rows;
+            var injections = new List<Injection>(rows.Length);
+            List<RunInjection>? setAside = null;
+            foreach (RunInjection r in rows)
             {
-                (Injection? inj, string? why) = Signal(r, a);
+                (Injection? inj, string? why) = Signal(_rows[r.Order], ai, a);
                 if (inj is null)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                     b.Qualifiers |= ResultQualifiers.MissingOrInvalidSignal;
                     b.Notes.Add("Injection " + Text.I(r.Order) + ": " + why);
+                    (setAside ??= new List<RunInjection>()).Add(r);
                     continue;
                 }
 
                 injections.Add(inj);
-                used.Add(r);
             }
+
+            IReadOnlyList<RunInjection> used = setAside is null ? rows : rows.Where(r => !setAside.Contains(r)).ToList();
 
             if (cal.Calibration is not RatioCalibration calibration)
             {
@@ -862,7 +924,7 @@ public static class RunProcessor
                 b.Notes.Add("Not quantified: no calibration (" + cal.Failure + ").");
                 foreach (RunInjection r in used)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
                 }
 
                 return;
@@ -887,7 +949,7 @@ public static class RunProcessor
                 b.Notes.Add("Not quantified: " + e.Message);
                 foreach (RunInjection r in used)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
                 }
 
                 return;
@@ -906,11 +968,13 @@ public static class RunProcessor
             }
 
             Outlier(a, b, injections, used);
-            foreach (RunInjection r in used)
+            for (int k = 0; k < used.Count; k++)
             {
+                RunInjection r = used[k];
                 RowState st = _rows[r.Order];
-                st.Set(a.Analyte, success, NonPositive(r, a));
-                if (r.Signals.Analyte(a.Analyte) <= 0)
+                double signal = st.AnalyteSignals[ai];
+                st.Set(ai, a.Analyte, success, NonPositive(signal));
+                if (signal <= 0)
                 {
                     b.Qualifiers |= ResultQualifiers.NonPositiveAnalyteSignal;
                 }
