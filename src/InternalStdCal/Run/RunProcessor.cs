@@ -68,7 +68,7 @@ public static class RunProcessor
         var state = new State(run, method);
         state.Recoveries();
         var calibrations = new List<AnalyteCalibration>();
-        var results = new List<ResultBuilder>();
+        var perAnalyte = new List<List<ResultBuilder>>(method.Analytes.Count);
         var qc = new List<QualityControlCheck>();
         foreach (AnalyteMethod a in method.Analytes)
         {
@@ -77,13 +77,19 @@ public static class RunProcessor
             List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
             List<QualityControlCheck> checks = state.QualityControl(a, cal);
             State.Bracket(checks, analyteResults);
-            results.AddRange(analyteResults);
+            perAnalyte.Add(analyteResults);
             qc.AddRange(checks);
         }
 
         var duplicates = new List<DuplicateCheck>();
         var spikes = new List<SpikeCheck>();
-        State.PairChecks(method, results, duplicates, spikes);
+        state.PairChecks(perAnalyte, duplicates, spikes);
+        var results = new List<AnalyteResult>(perAnalyte.Sum(l => l.Count));
+        foreach (List<ResultBuilder> analyteResults in perAnalyte)
+        {
+            results.AddRange(analyteResults.Select(r => r.Build()));
+        }
+
         var notes = run.Analytes.Where(a => method.For(a) is null)
             .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
             .ToList();
@@ -93,7 +99,7 @@ public static class RunProcessor
             method,
             state.References,
             calibrations,
-            results.Select(r => r.Build()).ToList(),
+            results,
             qc,
             duplicates,
             spikes,
@@ -352,6 +358,7 @@ public static class RunProcessor
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
         private readonly List<RunInjection[]> _samples;
         private readonly List<IReadOnlyList<int>> _sampleOrders;
+        private readonly Dictionary<string, int> _samplePosition = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _analyteIndex = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _isIndex = new(StringComparer.Ordinal);
         private readonly string[] _sortedAnalytes;
@@ -382,6 +389,10 @@ public static class RunProcessor
             // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
             _samples = run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
             _sampleOrders = _samples.Select(g => (IReadOnlyList<int>)Array.AsReadOnly(g.Select(r => r.Order).ToArray())).ToList();
+            for (int i = 0; i < _samples.Count; i++)
+            {
+                _samplePosition.Add(_samples[i][0].Id, i);
+            }
         }
 
         internal IReadOnlyDictionary<string, double?> References => _references;
@@ -407,35 +418,20 @@ public static class RunProcessor
             }
         }
 
-        internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        // perAnalyte: each method analyte's results, in the order of _samples, so a parent is found by its id's position.
+        internal void PairChecks(List<List<ResultBuilder>> perAnalyte, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
-            // Results by analyte, then by id (insertion order kept), in one pass instead of one filter per analyte.
-            var byAnalyte = new Dictionary<string, Dictionary<string, ResultBuilder>>(StringComparer.Ordinal);
-            foreach (ResultBuilder r in results)
+            for (int k = 0; k < perAnalyte.Count; k++)
             {
-                if (!byAnalyte.TryGetValue(r.Analyte, out Dictionary<string, ResultBuilder>? ids))
+                AnalyteMethod a = _method.Analytes[k];
+                List<ResultBuilder> byPosition = perAnalyte[k];
+                foreach (ResultBuilder d in byPosition.Where(r => r.Role == InjectionRole.SampleDuplicate))
                 {
-                    ids = new Dictionary<string, ResultBuilder>(StringComparer.Ordinal);
-                    byAnalyte.Add(r.Analyte, ids);
+                    ResultBuilder parent = byPosition[_samplePosition[d.Rows[0].ParentId!]];
+                    duplicates.Add(Duplicate(a.Analyte, parent, d, _method.DuplicateRpd));
                 }
 
-                ids.Add(r.Id, r);
-            }
-
-            foreach (AnalyteMethod a in method.Analytes)
-            {
-                if (!byAnalyte.TryGetValue(a.Analyte, out Dictionary<string, ResultBuilder>? byId))
-                {
-                    continue;
-                }
-
-                foreach (ResultBuilder d in byId.Values.Where(r => r.Role == InjectionRole.SampleDuplicate))
-                {
-                    ResultBuilder parent = byId[d.Rows[0].ParentId!];
-                    duplicates.Add(Duplicate(a.Analyte, parent, d, method.DuplicateRpd));
-                }
-
-                foreach (ResultBuilder s in byId.Values.Where(r => r.Role == InjectionRole.SpikedSample))
+                foreach (ResultBuilder s in byPosition.Where(r => r.Role == InjectionRole.SpikedSample))
                 {
                     RunInjection row = s.Rows[0];
                     if (!row.Added.TryGetValue(a.Analyte, out Concentration added))
@@ -444,7 +440,7 @@ public static class RunProcessor
                         continue;
                     }
 
-                    spikes.Add(Spike(a.Analyte, byId[row.ParentId!], s, added, method.SpikeRecovery));
+                    spikes.Add(Spike(a.Analyte, byPosition[_samplePosition[row.ParentId!]], s, added, _method.SpikeRecovery));
                 }
             }
         }
