@@ -144,6 +144,9 @@ public abstract class RatioCalibration
     /// <summary>Inverse prediction of x for the mean ratio of <paramref name="replicates"/> injections of an unknown.</summary>
     internal abstract AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method);
 
+    /// <summary>The numbers of <see cref="PredictAxis"/> (which is built on this), without notes or text.</summary>
+    internal abstract AxisEstimate EstimateAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method);
+
     /// <summary>x on the calibration axis for one response; null when the function cannot be inverted there.</summary>
     internal abstract double? InverseAxis(double response);
 

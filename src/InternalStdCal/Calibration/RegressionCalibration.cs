@@ -183,19 +183,16 @@ public sealed class RegressionCalibration : RatioCalibration
 
     internal override AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
     {
+        AxisEstimate e = EstimateAxis(meanRatio, replicates, confidenceLevel, method);
         var notes = new List<string>();
-        double? w0 = null;
         if (Weighting.IsPerPoint)
         {
-            double x0 = Regression.InverseEvaluate(meanRatio);
-            w0 = InterpolatedRawWeight(x0);
             notes.Add("Weight of the unknown for '" + Weighting.Name + "' weighting interpolated linearly (in "
-                + (Weighting.Scheme == WeightingScheme.InverseVariance ? "s" : "w") + ") between the standards at x0 = " + Text.G(x0) + " " + AxisUnitSymbol + ".");
+                + (Weighting.Scheme == WeightingScheme.InverseVariance ? "s" : "w") + ") between the standards at x0 = " + Text.G(e.X) + " " + AxisUnitSymbol + ".");
         }
 
-        InversePrediction p = Regression.InversePredict(meanRatio, replicates, confidenceLevel, w0);
-        double lower = p.Interval.Lower;
-        double upper = p.Interval.Upper;
+        // The method text only: the numbers are e's (InversePredict gives them bit for bit, see EstimateInverse).
+        string formula = Regression.InversePredict(meanRatio, replicates, confidenceLevel, e.UnknownWeight).Method;
         string how = "symmetric interval x0 ± t·s_x0";
         if (method == InverseIntervalMethod.Fieller)
         {
@@ -203,20 +200,34 @@ public sealed class RegressionCalibration : RatioCalibration
             {
                 notes.Add("Fieller's interval is defined here for straight lines only; the symmetric interval is given for the quadratic.");
             }
-            else if (Regression.FiellerInterval(meanRatio, replicates, confidenceLevel, w0) is ConfidenceInterval f)
+            else if (e.Lower is not null)
             {
-                lower = f.Lower;
-                upper = f.Upper;
                 how = "Fieller interval";
             }
             else
             {
                 notes.Add("Fieller's interval is unbounded: the slope is not significantly different from 0 at this confidence level (g ≥ 1).");
-                return new AxisPrediction(p.Value, p.StandardError, null, null, p.DegreesOfFreedom, p.Method + "; Fieller interval unbounded", notes);
+                return new AxisPrediction(e.X, e.StandardError, null, null, e.DegreesOfFreedom, formula + "; Fieller interval unbounded", notes);
             }
         }
 
-        return new AxisPrediction(p.Value, p.StandardError, lower, upper, p.DegreesOfFreedom, p.Method + "; " + how, notes);
+        return new AxisPrediction(e.X, e.StandardError, e.Lower, e.Upper, e.DegreesOfFreedom, formula + "; " + how, notes);
+    }
+
+    internal override AxisEstimate EstimateAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
+    {
+        double? w0 = Weighting.IsPerPoint ? InterpolatedRawWeight(Regression.InverseEvaluate(meanRatio)) : null;
+        InverseEstimate p = Regression.EstimateInverse(meanRatio, replicates, confidenceLevel, w0);
+        double? lower = p.Interval.Lower;
+        double? upper = p.Interval.Upper;
+        if (method == InverseIntervalMethod.Fieller && Regression.Model != CalibrationModel.Quadratic)
+        {
+            ConfidenceInterval? f = Regression.FiellerInterval(meanRatio, replicates, confidenceLevel, w0);
+            lower = f?.Lower;
+            upper = f?.Upper;
+        }
+
+        return new AxisEstimate(p.Value, p.StandardError, lower, upper, p.DegreesOfFreedom, w0);
     }
 
     internal override string ModelText()

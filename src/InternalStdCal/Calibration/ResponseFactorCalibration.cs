@@ -133,23 +133,34 @@ public sealed class ResponseFactorCalibration : RatioCalibration
     /// the analogue of s_x0 for this model).</summary>
     internal override AxisPrediction PredictAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
     {
-        double x = InverseAxis(meanRatio)!.Value;
+        AxisEstimate e = EstimateAxis(meanRatio, replicates, confidenceLevel, method);
         var notes = new List<string>();
         if (method == InverseIntervalMethod.Fieller)
         {
             notes.Add("Fieller's interval applies to straight-line regressions; the response-factor model gives the symmetric interval.");
         }
 
-        if (ResponseFactorStandardDeviation is not double sd)
+        if (e.StandardError is null)
         {
             notes.Add("Single response factor: no spread is available, so no standard error or interval.");
-            return new AxisPrediction(x, null, null, null, null, "mean response factor (no spread)", notes);
+            return new AxisPrediction(e.X, null, null, null, null, "mean response factor (no spread)", notes);
+        }
+
+        return new AxisPrediction(e.X, e.StandardError, e.Lower, e.Upper, e.DegreesOfFreedom, "mean response factor, relative SD of the RFs: s = C·RSD·sqrt(1/m + 1/n)", notes);
+    }
+
+    internal override AxisEstimate EstimateAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
+    {
+        double x = InverseAxis(meanRatio)!.Value;
+        if (ResponseFactorStandardDeviation is not double sd)
+        {
+            return new AxisEstimate(x, null, null, null, null, null);
         }
 
         int n = ResponseFactorCount;
         double se = Math.Abs(x) * sd / MeanResponseFactor * Math.Sqrt((1.0 / replicates) + (1.0 / n));
         double t = StudentTQuantile.TwoSided(confidenceLevel, n - 1);
-        return new AxisPrediction(x, se, x - (t * se), x + (t * se), n - 1, "mean response factor, relative SD of the RFs: s = C·RSD·sqrt(1/m + 1/n)", notes);
+        return new AxisEstimate(x, se, x - (t * se), x + (t * se), n - 1, null);
     }
 
     internal override double? InverseAxis(double response)

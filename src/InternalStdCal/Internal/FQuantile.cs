@@ -12,6 +12,9 @@ namespace InternalStdCal.Internal;
 /// </remarks>
 internal static class FQuantile
 {
+    // Quantiles by (p, df1, df2): every calibration of a run asks for the same few values.
+    private static readonly QuantileCache Cache = new();
+
     /// <summary>Quantile F(p; df1, df2) at cumulative probability p, e.g. F(0.99; 9, 9) = 5.35113.</summary>
     /// <exception cref="ArgumentOutOfRangeException">p outside (0, 1) or a df &lt; 1.</exception>
     internal static double Quantile(double p, int numeratorDf, int denominatorDf)
@@ -19,6 +22,11 @@ internal static class FQuantile
         Guard.InOpenRange(p, 0, 1, nameof(p));
         Guard.AtLeast(numeratorDf, 1, nameof(numeratorDf));
         Guard.AtLeast(denominatorDf, 1, nameof(denominatorDf));
+        return Cache.GetOrAdd(p, numeratorDf, denominatorDf, static (q, d1, d2) => Solve(q, d1, d2));
+    }
+
+    private static double Solve(double p, int numeratorDf, int denominatorDf)
+    {
         // Start from the exact value for one numerator df, F(p; 1, ν) = t((1 + p)/2, ν)², else from 1.
         double guess = 1;
         if (numeratorDf == 1)

@@ -16,13 +16,16 @@ namespace InternalStdCal.Internal;
 /// </remarks>
 internal static class StudentTQuantile
 {
+    // Two-sided quantiles by (confidence, df): a run or a batch asks for the same few values over and over.
+    private static readonly QuantileCache Cache = new();
+
     /// <summary>Two-sided critical value t((1 + confidence)/2, df), e.g. 2.5706 for 0.95 and 5 df.</summary>
     /// <exception cref="ArgumentOutOfRangeException">confidence outside (0, 1) or df &lt; 1.</exception>
     internal static double TwoSided(double confidence, int df)
     {
         Guard.InOpenRange(confidence, 0, 1, nameof(confidence));
         Guard.AtLeast(df, 1, nameof(df));
-        return UpperTailQuantile((1 - confidence) / 2, df);
+        return Cache.GetOrAdd(confidence, df, 0, static (p, nu, _) => UpperTailQuantile((1 - p) / 2, nu));
     }
 
     /// <summary>Quantile t(p, df) at cumulative probability p (negative for p &lt; ½).</summary>

@@ -74,6 +74,19 @@ public sealed class SampleResult
         return Build(measured, dilutions, c => c, new List<BudgetTerm>(), null, null, null);
     }
 
+    /// <summary>The value <see cref="Liquid"/> gives for an exact measured value, without the budget (same arithmetic).</summary>
+    internal static Concentration LiquidValue(Concentration measured, DilutionStep[] dilutions) => Undilute(measured, dilutions);
+
+    /// <summary>The value of <see cref="Solid(Measured{Concentration}, Measured{Volume}, Measured{Mass}, IReadOnlyList{DilutionStep}, ConcentrationUnit)"/>
+    /// for an exact measured value, without the budget (same arithmetic; arguments already validated).</summary>
+    internal static Concentration SolidValue(Concentration measured, Measured<Volume> digestVolume, Measured<Mass> sampleMass, DilutionStep[] dilutions, ConcentrationUnit resultUnit) =>
+        FromVolumeDigest(Undilute(measured, dilutions), LitresPerKilogram(digestVolume, sampleMass), resultUnit);
+
+    /// <summary>The value of <see cref="Solid(Measured{Concentration}, Measured{Mass}, Measured{Mass}, IReadOnlyList{DilutionStep}, ConcentrationUnit)"/>
+    /// for an exact measured value, without the budget (same arithmetic; arguments already validated).</summary>
+    internal static Concentration SolidValue(Concentration measured, Measured<Mass> digestMass, Measured<Mass> sampleMass, DilutionStep[] dilutions, ConcentrationUnit resultUnit) =>
+        FromMassDigest(Undilute(measured, dilutions), digestMass.Value.RatioTo(sampleMass.Value), resultUnit);
+
     /// <summary>Back-calculates a solid sample digested (or extracted) and made up to a volume:
     /// w = γ_measured · V_digest · DF_total / m_sample.</summary>
     /// <param name="measured">Mass concentration in the measured solution with its standard uncertainty (any finite value).</param>
@@ -94,7 +107,7 @@ public sealed class SampleResult
         Guard.PositiveQuantity(sampleMass.Value, nameof(sampleMass), "a mass");
         Guard.NotNull(dilutions, nameof(dilutions));
         PreparedSolution.RequireKind(resultUnit, ConcentrationKind.MassFraction, "the result refers to the mass of sample", nameof(resultUnit));
-        double litresPerKilogram = Guard.FiniteResult(digestVolume.Value.Litres / sampleMass.Value.Kilograms, sampleMass.Value, nameof(sampleMass), "V_digest/m_sample");
+        double litresPerKilogram = LitresPerKilogram(digestVolume, sampleMass);
         var terms = new List<BudgetTerm>
         {
             BudgetTerm.Of(SampleStage, "digest volume", digestVolume, +1),
@@ -103,11 +116,7 @@ public sealed class SampleResult
         return Build(
             measured,
             dilutions,
-            digest =>
-            {
-                PreparedSolution.RequireKind(digest.Unit, ConcentrationKind.MassConcentration, "a digest made up to a volume must be expressed per volume", nameof(measured));
-                return Concentration.From(digest.BaseValue * litresPerKilogram, ConcentrationUnit.GramPerKilogram).ConvertTo(resultUnit);
-            },
+            digest => FromVolumeDigest(digest, litresPerKilogram, resultUnit),
             terms,
             digestVolume,
             null,
@@ -142,11 +151,7 @@ public sealed class SampleResult
         return Build(
             measured,
             dilutions,
-            digest =>
-            {
-                PreparedSolution.RequireKind(digest.Unit, ConcentrationKind.MassFraction, "a digest made up to a mass must be expressed per mass", nameof(measured));
-                return Concentration.From(digest.Value * ratio, digest.Unit).ConvertTo(resultUnit);
-            },
+            digest => FromMassDigest(digest, ratio, resultUnit),
             terms,
             null,
             digestMass,
@@ -207,23 +212,7 @@ public sealed class SampleResult
         terms.AddRange(sampleTerms);
 
         // y = K·C_measured is linear, so K·u(C_measured) is the model applied to u(C_measured).
-        Concentration Model(Concentration measuredValue)
-        {
-            Concentration c = measuredValue;
-            for (int i = steps.Length - 1; i >= 0; i--)
-            {
-                if (!steps[i].Produces(c.Kind))
-                {
-                    throw new ArgumentException(
-                        FormattableString.Invariant($"Parameter 'dilutions[{i}]' ({steps[i].Label}) cannot have produced {c} ({c.Kind}); check the order of the dilutions and the kind of the measured concentration."),
-                        FormattableString.Invariant($"dilutions[{i}]"));
-                }
-
-                c = steps[i].Reverse(c);
-            }
-
-            return toSample(c);
-        }
+        Concentration Model(Concentration measuredValue) => toSample(Undilute(measuredValue, steps));
 
         Concentration result;
         try
@@ -243,5 +232,39 @@ public sealed class SampleResult
         }
 
         return new SampleResult(measured, steps, totalDilutionFactor, UncertaintyBudget.Create(result, terms, contributions), digestVolume, digestMass, sampleMass);
+    }
+
+    // The measured concentration carried back through the dilutions, last step first.
+    private static Concentration Undilute(Concentration measured, DilutionStep[] steps)
+    {
+        Concentration c = measured;
+        for (int i = steps.Length - 1; i >= 0; i--)
+        {
+            if (!steps[i].Produces(c.Kind))
+            {
+                throw new ArgumentException(
+                    FormattableString.Invariant($"Parameter 'dilutions[{i}]' ({steps[i].Label}) cannot have produced {c} ({c.Kind}); check the order of the dilutions and the kind of the measured concentration."),
+                    FormattableString.Invariant($"dilutions[{i}]"));
+            }
+
+            c = steps[i].Reverse(c);
+        }
+
+        return c;
+    }
+
+    private static double LitresPerKilogram(Measured<Volume> digestVolume, Measured<Mass> sampleMass) =>
+        Guard.FiniteResult(digestVolume.Value.Litres / sampleMass.Value.Kilograms, sampleMass.Value, nameof(sampleMass), "V_digest/m_sample");
+
+    private static Concentration FromVolumeDigest(Concentration digest, double litresPerKilogram, ConcentrationUnit resultUnit)
+    {
+        PreparedSolution.RequireKind(digest.Unit, ConcentrationKind.MassConcentration, "a digest made up to a volume must be expressed per volume", "measured");
+        return Concentration.From(digest.BaseValue * litresPerKilogram, ConcentrationUnit.GramPerKilogram).ConvertTo(resultUnit);
+    }
+
+    private static Concentration FromMassDigest(Concentration digest, double ratio, ConcentrationUnit resultUnit)
+    {
+        PreparedSolution.RequireKind(digest.Unit, ConcentrationKind.MassFraction, "a digest made up to a mass must be expressed per mass", "measured");
+        return Concentration.From(digest.Value * ratio, digest.Unit).ConvertTo(resultUnit);
     }
 }

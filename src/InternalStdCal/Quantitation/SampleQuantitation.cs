@@ -36,28 +36,17 @@ public static class SampleQuantitation
     /// vertex of a parabola), so no standard error exists.</exception>
     public static QuantitationResult Quantify(RatioCalibration calibration, UnknownSample sample, double confidenceLevel = 0.95, InverseIntervalMethod intervalMethod = InverseIntervalMethod.Symmetric)
     {
-        Guard.NotNull(calibration, nameof(calibration));
-        Guard.NotNull(sample, nameof(sample));
-        Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
         if (intervalMethod is not (InverseIntervalMethod.Symmetric or InverseIntervalMethod.Fieller))
         {
             throw new ArgumentOutOfRangeException(nameof(intervalMethod), intervalMethod, $"Parameter 'intervalMethod' was {(int)intervalMethod}; it must be Symmetric or Fieller.");
         }
 
-        Concentration isConc = sample.InternalStandardConcentration;
-        if (isConc.Kind != Concentration.KindOf(calibration.Unit))
-        {
-            throw new ArgumentException(
-                $"Parameter 'sample': the IS concentration of '{sample.Label}' is {isConc} ({isConc.Kind}) but the calibration is in {Concentration.SymbolOf(calibration.Unit)} ({Concentration.KindOf(calibration.Unit)}); the kinds must match.",
-                nameof(sample));
-        }
-
+        double cIs = InternalStandardInCalibrationUnit(calibration, sample, confidenceLevel);
         StandardSet set = calibration.Set;
-        double cIs = isConc.In(calibration.Unit);
         var notes = new List<string>();
         if (calibration.Axis == CalibrationAxis.AnalyteConcentration && cIs != set.ReferenceIs)
         {
-            notes.Add("The sample's IS concentration (" + isConc.ToString("G6", null) + ") differs from the calibration's ("
+            notes.Add("The sample's IS concentration (" + sample.InternalStandardConcentration.ToString("G6", null) + ") differs from the calibration's ("
                 + Text.G(set.ReferenceIs) + " " + set.Symbol + "); the result is scaled by their ratio " + Text.G(cIs / set.ReferenceIs) + ".");
         }
 
@@ -70,13 +59,11 @@ public static class SampleQuantitation
         }
         catch (ArgumentOutOfRangeException e) when (e.ParamName == "response")
         {
-            throw new ArgumentException($"Parameter 'sample': the mean ratio of '{sample.Label}' cannot be read off the calibration function. {e.Message}", nameof(sample), e);
+            throw Unreadable(sample, e);
         }
 
         notes.AddRange(p.Notes);
-        ExtrapolationStatus status = p.X < calibration.LowestX ? ExtrapolationStatus.BelowLowestStandard
-            : p.X > calibration.HighestX ? ExtrapolationStatus.AboveHighestStandard
-            : ExtrapolationStatus.WithinRange;
+        ExtrapolationStatus status = Extrapolation(calibration, p.X);
         if (status != ExtrapolationStatus.WithinRange)
         {
             notes.Add("x0 = " + Text.G(p.X) + " " + calibration.AxisUnitSymbol + " lies outside the calibrated range "
@@ -107,10 +94,10 @@ public static class SampleQuantitation
             sample,
             calibration.Model,
             meanRatio,
-            calibration.Conc(set.ToConcentration(p.X, cIs)),
-            p.StandardError is double se ? calibration.Conc(set.ToConcentration(se, cIs)) : null,
-            p.Lower is double lo ? calibration.Conc(set.ToConcentration(lo, cIs)) : null,
-            p.Upper is double hi ? calibration.Conc(set.ToConcentration(hi, cIs)) : null,
+            ToConcentration(calibration, p.X, cIs),
+            ToConcentration(calibration, p.StandardError, cIs),
+            ToConcentration(calibration, p.Lower, cIs),
+            ToConcentration(calibration, p.Upper, cIs),
             confidenceLevel,
             p.DegreesOfFreedom,
             p.Method,
@@ -118,6 +105,32 @@ public static class SampleQuantitation
             perInjection,
             spread,
             notes);
+    }
+
+    /// <summary>
+    /// The numbers <see cref="Quantify"/> gives (concentration, interval, extrapolation), bit for bit and with the same exceptions, without notes, method text or per-injection values:
+    /// for batch processing that builds the full result only when it is asked for.
+    /// </summary>
+    internal static QuantitationEstimate Estimate(RatioCalibration calibration, UnknownSample sample, double confidenceLevel, InverseIntervalMethod intervalMethod)
+    {
+        double cIs = InternalStandardInCalibrationUnit(calibration, sample, confidenceLevel);
+        double meanRatio = sample.MeanResponse;
+        AxisEstimate p;
+        try
+        {
+            p = calibration.EstimateAxis(meanRatio, sample.Injections.Count, confidenceLevel, intervalMethod);
+        }
+        catch (ArgumentOutOfRangeException e) when (e.ParamName == "response")
+        {
+            throw Unreadable(sample, e);
+        }
+
+        return new QuantitationEstimate(
+            meanRatio,
+            ToConcentration(calibration, p.X, cIs),
+            ToConcentration(calibration, p.Lower, cIs),
+            ToConcentration(calibration, p.Upper, cIs),
+            Extrapolation(calibration, p.X));
     }
 
     /// <summary>Quantifies several unknowns with the same calibration.</summary>
@@ -132,4 +145,35 @@ public static class SampleQuantitation
     /// <exception cref="InvalidOperationException">As for <see cref="Quantify"/>.</exception>
     public static IReadOnlyList<QuantitationResult> QuantifyAll(RatioCalibration calibration, IEnumerable<UnknownSample> samples, double confidenceLevel = 0.95, InverseIntervalMethod intervalMethod = InverseIntervalMethod.Symmetric) =>
         Guard.NotNull(samples, nameof(samples)).Select(s => Quantify(calibration, s, confidenceLevel, intervalMethod)).ToList();
+
+    // Checks shared by Quantify and Estimate; the sample's IS concentration in the calibration's unit.
+    private static double InternalStandardInCalibrationUnit(RatioCalibration calibration, UnknownSample sample, double confidenceLevel)
+    {
+        Guard.NotNull(calibration, nameof(calibration));
+        Guard.NotNull(sample, nameof(sample));
+        Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
+        Concentration isConc = sample.InternalStandardConcentration;
+        if (isConc.Kind != Concentration.KindOf(calibration.Unit))
+        {
+            throw new ArgumentException(
+                $"Parameter 'sample': the IS concentration of '{sample.Label}' is {isConc} ({isConc.Kind}) but the calibration is in {Concentration.SymbolOf(calibration.Unit)} ({Concentration.KindOf(calibration.Unit)}); the kinds must match.",
+                nameof(sample));
+        }
+
+        return isConc.In(calibration.Unit);
+    }
+
+    private static ArgumentException Unreadable(UnknownSample sample, ArgumentOutOfRangeException e) =>
+        new($"Parameter 'sample': the mean ratio of '{sample.Label}' cannot be read off the calibration function. {e.Message}", nameof(sample), e);
+
+    private static ExtrapolationStatus Extrapolation(RatioCalibration calibration, double x) =>
+        x < calibration.LowestX ? ExtrapolationStatus.BelowLowestStandard
+        : x > calibration.HighestX ? ExtrapolationStatus.AboveHighestStandard
+        : ExtrapolationStatus.WithinRange;
+
+    private static Concentration ToConcentration(RatioCalibration calibration, double axisValue, double cIs) =>
+        calibration.Conc(calibration.Set.ToConcentration(axisValue, cIs));
+
+    private static Concentration? ToConcentration(RatioCalibration calibration, double? axisValue, double cIs) =>
+        axisValue is double v ? ToConcentration(calibration, v, cIs) : null;
 }

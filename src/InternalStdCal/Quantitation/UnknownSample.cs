@@ -79,7 +79,20 @@ public sealed class UnknownSample
     public IReadOnlyList<Injection> Injections => _injections;
 
     /// <summary>Mean response ratio analyte/IS of the injections.</summary>
-    public double MeanResponse => _injections.Average(i => i.Ratio);
+    public double MeanResponse
+    {
+        get
+        {
+            // Summed in order from the first ratio, then divided by the count (as Enumerable.Average), without allocating.
+            double sum = _injections[0].Ratio;
+            for (int i = 1; i < _injections.Length; i++)
+            {
+                sum += _injections[i].Ratio;
+            }
+
+            return sum / _injections.Length;
+        }
+    }
 
     /// <summary>Prints e.g. "RF-19: 2 injections, mean ratio 0.010171, IS 10 µg/L" (invariant culture, ratio to 6
     /// significant digits).</summary>

@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using System.Threading;
 using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantitation;
@@ -18,30 +19,47 @@ namespace InternalStdCal.Run;
 /// <see cref="Notes"/>.</remarks>
 public sealed class AnalyteResult
 {
+    private readonly IResultSource? _source;
+    private QuantitationResult? _quantitation;
+    private SampleResult? _sampleCalculation;
+
     internal AnalyteResult(
         string sampleId,
         InjectionRole role,
         string analyte,
         IReadOnlyList<int> injectionOrders,
-        QuantitationResult? quantitation,
-        SampleResult? inSample,
+        Concentration? inMeasuredSolution,
+        Concentration? measuredLower,
+        Concentration? measuredUpper,
         Concentration? sampleLower,
         Concentration? sampleUpper,
         ReportedValue? reported,
         ResultQualifiers qualifiers,
-        IReadOnlyList<string> notes)
+        IReadOnlyList<string> notes,
+        IResultSource? source)
     {
         SampleId = sampleId;
         Role = role;
         Analyte = analyte;
         InjectionOrders = injectionOrders;
-        Quantitation = quantitation;
-        SampleCalculation = inSample;
+        InMeasuredSolution = inMeasuredSolution;
+        MeasuredLower = measuredLower;
+        MeasuredUpper = measuredUpper;
         SampleLower = sampleLower;
         SampleUpper = sampleUpper;
         Reported = reported;
         Qualifiers = qualifiers;
         Notes = notes;
+        _source = source;
+    }
+
+    /// <summary>Builds the quantitation and the back-calculation of a result on first use (same numbers as the
+    /// values the result was made with).</summary>
+    internal interface IResultSource
+    {
+        QuantitationResult? Quantitation();
+
+        SampleResult? SampleCalculation(QuantitationResult quantitation);
     }
 
     /// <summary>Id of the sample.</summary>
@@ -57,20 +75,25 @@ public sealed class AnalyteResult
     public IReadOnlyList<int> InjectionOrders { get; }
 
     /// <summary>The quantitation in the measured solution (calibration unit); null when not quantified.</summary>
-    public QuantitationResult? Quantitation { get; }
+    /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
+    public QuantitationResult? Quantitation =>
+        Volatile.Read(ref _quantitation) ?? (_source?.Quantitation() is QuantitationResult q ? Interlocked.CompareExchange(ref _quantitation, q, null) ?? q : null);
 
     /// <summary>Concentration in the measured solution (calibration unit); null when not quantified.</summary>
-    public Concentration? InMeasuredSolution => Quantitation?.Concentration;
+    public Concentration? InMeasuredSolution { get; }
 
     /// <summary>Lower confidence limit in the measured solution; null without an interval.</summary>
-    public Concentration? MeasuredLower => Quantitation?.Lower;
+    public Concentration? MeasuredLower { get; }
 
     /// <summary>Upper confidence limit in the measured solution; null without an interval.</summary>
-    public Concentration? MeasuredUpper => Quantitation?.Upper;
+    public Concentration? MeasuredUpper { get; }
 
     /// <summary>The back-calculation to the original sample (dilutions, digest, sample mass) with its uncertainty
     /// budget; null when not quantified or when the preparation does not fit the result's kind (see <see cref="Notes"/>).</summary>
-    public SampleResult? SampleCalculation { get; }
+    /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
+    public SampleResult? SampleCalculation =>
+        Volatile.Read(ref _sampleCalculation)
+        ?? (Quantitation is QuantitationResult q && _source!.SampleCalculation(q) is SampleResult s ? Interlocked.CompareExchange(ref _sampleCalculation, s, null) ?? s : null);
 
     /// <summary>Concentration in the original sample with its standard uncertainty (calibration standard error
     /// and preparation terms combined, see <see cref="SampleResult"/>); null as <see cref="SampleCalculation"/>.</summary>

@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Linq;
 
@@ -74,4 +75,48 @@ public sealed class InjectionOutcome
 
     /// <summary>Why the row (or one analyte of it) was set aside or flagged; empty when nothing to say.</summary>
     public IReadOnlyList<string> Reasons { get; }
+}
+
+/// <summary>Analyte → status of one injection over keys shared by every row of a report, sorted ordinally (as a
+/// <see cref="SortedDictionary{TKey, TValue}"/> with an ordinal comparer would be), looked up by binary search.</summary>
+internal sealed class AnalyteStatusMap : IReadOnlyDictionary<string, InjectionStatus>
+{
+    private readonly string[] _keys;
+    private readonly InjectionStatus[] _values;
+
+    internal AnalyteStatusMap(string[] sortedKeys, InjectionStatus[] values)
+    {
+        _keys = sortedKeys;
+        _values = values;
+    }
+
+    public int Count => _keys.Length;
+
+    public IEnumerable<string> Keys => _keys;
+
+    public IEnumerable<InjectionStatus> Values => _values;
+
+    public InjectionStatus this[string key] =>
+        TryGetValue(key, out InjectionStatus value) ? value : throw new KeyNotFoundException("The analyte '" + key + "' is not in the method.");
+
+    public bool ContainsKey(string key) => IndexOf(key) >= 0;
+
+    public bool TryGetValue(string key, out InjectionStatus value)
+    {
+        int k = IndexOf(key);
+        value = k >= 0 ? _values[k] : default;
+        return k >= 0;
+    }
+
+    public IEnumerator<KeyValuePair<string, InjectionStatus>> GetEnumerator()
+    {
+        for (int k = 0; k < _keys.Length; k++)
+        {
+            yield return new KeyValuePair<string, InjectionStatus>(_keys[k], _values[k]);
+        }
+    }
+
+    System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+
+    private int IndexOf(string key) => Array.BinarySearch(_keys, Internal.Guard.NotNull(key, nameof(key)), StringComparer.Ordinal);
 }

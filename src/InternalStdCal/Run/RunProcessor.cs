@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Linq;
+using System.Threading;
 using InternalStdCal.Calibration;
 using InternalStdCal.Internal;
 using InternalStdCal.Limits;
@@ -67,7 +68,7 @@ public static class RunProcessor
         var state = new State(run, method);
         state.Recoveries();
         var calibrations = new List<AnalyteCalibration>();
-        var results = new List<ResultBuilder>();
+        var perAnalyte = new List<List<ResultBuilder>>(method.Analytes.Count);
         var qc = new List<QualityControlCheck>();
         foreach (AnalyteMethod a in method.Analytes)
         {
@@ -76,13 +77,19 @@ public static class RunProcessor
             List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
             List<QualityControlCheck> checks = state.QualityControl(a, cal);
             State.Bracket(checks, analyteResults);
-            results.AddRange(analyteResults);
+            perAnalyte.Add(analyteResults);
             qc.AddRange(checks);
         }
 
         var duplicates = new List<DuplicateCheck>();
         var spikes = new List<SpikeCheck>();
-        State.PairChecks(method, results, duplicates, spikes);
+        state.PairChecks(perAnalyte, duplicates, spikes);
+        var results = new List<AnalyteResult>(perAnalyte.Sum(l => l.Count));
+        foreach (List<ResultBuilder> analyteResults in perAnalyte)
+        {
+            results.AddRange(analyteResults.Select(r => r.Build()));
+        }
+
         var notes = run.Analytes.Where(a => method.For(a) is null)
             .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
             .ToList();
@@ -92,7 +99,7 @@ public static class RunProcessor
             method,
             state.References,
             calibrations,
-            results.Select(r => r.Build()).ToList(),
+            results,
             qc,
             duplicates,
             spikes,
@@ -165,37 +172,63 @@ public static class RunProcessor
 
     private sealed class RowState
     {
-        internal RowState(RunInjection row)
+        internal RowState(RunInjection row, Dictionary<string, int> analytes, IReadOnlyList<string> internalStandards)
         {
             Row = row;
+            Statuses = new InjectionStatus?[analytes.Count];
+            AnalyteSignals = new double[analytes.Count];
+            AnalyteSignals.AsSpan().Fill(double.NaN);
+            foreach (KeyValuePair<string, double> signal in row.Signals.Analytes)
+            {
+                if (analytes.TryGetValue(signal.Key, out int k))
+                {
+                    AnalyteSignals[k] = signal.Value;
+                }
+            }
+
+            InternalStandardSignals = new double[internalStandards.Count];
+            for (int k = 0; k < InternalStandardSignals.Length; k++)
+            {
+                InternalStandardSignals[k] = row.Signals.InternalStandard(internalStandards[k]) ?? double.NaN;
+            }
         }
 
         internal RunInjection Row { get; }
 
-        internal Dictionary<string, InjectionStatus> Statuses { get; } = new(StringComparer.Ordinal);
+        // By method analyte index; null = not used for that analyte (reported as excluded).
+        internal InjectionStatus?[] Statuses { get; }
+
+        // Signals by method analyte index and by run IS index, read once per run; NaN = not recorded (signals are finite).
+        internal double[] AnalyteSignals { get; }
+
+        internal double[] InternalStandardSignals { get; }
 
         internal List<string> Reasons { get; } = new();
 
         internal List<InternalStandardRecovery> Recoveries { get; } = new();
 
-        internal void Set(string analyte, InjectionStatus status, string? reason)
+        internal void Set(int analyte, string name, InjectionStatus status, string? reason)
         {
             Statuses[analyte] = status;
             if (reason is not null)
             {
-                Reasons.Add(analyte + ": " + reason);
+                Reasons.Add(name + ": " + reason);
             }
         }
     }
 
-    private sealed class ResultBuilder
+    // One sample × analyte while the run is processed; afterwards the source of the result's quantitation, sample
+    // calculation and notes, which are built only when asked for.
+    private sealed class ResultBuilder : AnalyteResult.IResultSource
     {
-        internal ResultBuilder(string id, InjectionRole role, string analyte, IReadOnlyList<RunInjection> rows)
+        internal ResultBuilder(string id, InjectionRole role, string analyte, RunInjection[] rows, IReadOnlyList<int> orders)
         {
             Id = id;
             Role = role;
             Analyte = analyte;
             Rows = rows;
+            Orders = orders;
+            Notes = new NoteList(this);
         }
 
         internal string Id { get; }
@@ -204,24 +237,122 @@ public static class RunProcessor
 
         internal string Analyte { get; }
 
-        internal IReadOnlyList<RunInjection> Rows { get; }
+        internal RunInjection[] Rows { get; }
 
-        internal QuantitationResult? Quantitation { get; set; }
+        internal IReadOnlyList<int> Orders { get; }
 
-        internal SampleResult? InSample { get; set; }
-
-        internal Concentration? SampleLower { get; set; }
-
-        internal Concentration? SampleUpper { get; set; }
-
-        internal ReportedValue? Reported { get; set; }
+        internal NoteList Notes { get; }
 
         internal ResultQualifiers Qualifiers { get; set; }
 
-        internal List<string> Notes { get; } = new();
+        // What SampleQuantitation.Quantify is called with (again) when the quantitation is asked for.
+        internal RatioCalibration? Calibration { get; private set; }
+
+        internal UnknownSample? Sample { get; private set; }
+
+        internal RunMethod? Method { get; private set; }
+
+        internal IReadOnlyList<RunInjection>? Used { get; private set; }
+
+        internal QuantitationEstimate? Estimate { get; private set; }
+
+        internal SamplePreparation? Preparation { get; private set; }
+
+        internal Concentration? InSample { get; private set; }
+
+        internal Concentration? SampleLower { get; private set; }
+
+        internal Concentration? SampleUpper { get; private set; }
+
+        internal ReportedValue? Reported { get; set; }
+
+        internal void Quantified(RatioCalibration calibration, UnknownSample sample, RunMethod method, IReadOnlyList<RunInjection> used, QuantitationEstimate estimate)
+        {
+            Calibration = calibration;
+            Sample = sample;
+            Method = method;
+            Used = used;
+            Estimate = estimate;
+        }
+
+        internal void InOriginalSample(SamplePreparation preparation, Concentration value, Concentration? lower, Concentration? upper)
+        {
+            Preparation = preparation;
+            InSample = value;
+            SampleLower = lower;
+            SampleUpper = upper;
+        }
+
+        public QuantitationResult? Quantitation() =>
+            Estimate is null ? null : SampleQuantitation.Quantify(Calibration!, Sample!, Method!.ConfidenceLevel, Method.IntervalMethod);
+
+        public SampleResult? SampleCalculation(QuantitationResult quantitation) =>
+            InSample is null ? null : Preparation!.ToSample(quantitation.AsMeasured() ?? Measured.Exact(quantitation.Concentration));
 
         internal AnalyteResult Build() =>
-            new(Id, Role, Analyte, Rows.Select(r => r.Order).ToList(), Quantitation, InSample, SampleLower, SampleUpper, Reported, Qualifiers, Notes.ToList());
+            new(Id, Role, Analyte, Orders, Estimate?.Concentration, Estimate?.Lower, Estimate?.Upper, SampleLower, SampleUpper, Reported, Qualifiers, Notes, Estimate is null ? null : this);
+
+        internal string UsedInjectionsNote()
+        {
+            QuantitationEstimate q = Estimate!.Value;
+            return "Injections used: " + string.Join(", ", Used!.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(q.MeanResponse) + " → " + q.Concentration.ToString("G6", null) + " in the measured solution.";
+        }
+
+        internal string OriginalSampleNote() => "Original sample: " + Preparation + " → " + InSample!.Value.ToString("G6", null) + ".";
+    }
+
+    // The notes of a result in order; the two every quantified result has are formatted on first read (thread-safe).
+    private sealed class NoteList : IReadOnlyList<string>
+    {
+        private readonly ResultBuilder _owner;
+        private (string? Text, bool OriginalSample)[] _entries = new (string?, bool)[2];
+        private int _count;
+        private string[]? _texts;
+
+        internal NoteList(ResultBuilder owner) => _owner = owner;
+
+        public int Count => _count;
+
+        public string this[int index] => Texts()[index];
+
+        internal void Add(string text) => Append((text, false));
+
+        // "Injections used: …" (text null, false) and "Original sample: …" (text null, true).
+        internal void AddUsedInjections() => Append((null, false));
+
+        internal void AddOriginalSample() => Append((null, true));
+
+        public IEnumerator<string> GetEnumerator() => ((IEnumerable<string>)Texts()).GetEnumerator();
+
+        System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
+
+        private void Append((string?, bool) entry)
+        {
+            if (_count == _entries.Length)
+            {
+                Array.Resize(ref _entries, 2 * _count);
+            }
+
+            _entries[_count++] = entry;
+        }
+
+        private string[] Texts()
+        {
+            string[]? texts = Volatile.Read(ref _texts);
+            if (texts is null)
+            {
+                texts = new string[_count];
+                for (int i = 0; i < texts.Length; i++)
+                {
+                    (string? text, bool originalSample) = _entries[i];
+                    texts[i] = text ?? (originalSample ? _owner.OriginalSampleNote() : _owner.UsedInjectionsNote());
+                }
+
+                texts = Interlocked.CompareExchange(ref _texts, texts, null) ?? texts;
+            }
+
+            return texts;
+        }
     }
 
     private sealed class State
@@ -231,18 +362,42 @@ public static class RunProcessor
         private readonly Dictionary<int, RowState> _rows = new();
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
         private readonly List<RunInjection[]> _samples;
+        private readonly List<IReadOnlyList<int>> _sampleOrders;
+        private readonly Dictionary<string, int> _samplePosition = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, int> _analyteIndex = new(StringComparer.Ordinal);
+        private readonly Dictionary<string, int> _isIndex = new(StringComparer.Ordinal);
+        private readonly string[] _sortedAnalytes;
+        private readonly int[] _sortedToIndex;
 
         internal State(AnalyticalRun run, RunMethod method)
         {
             _run = run;
             _method = method;
+            for (int k = 0; k < method.Analytes.Count; k++)
+            {
+                _analyteIndex[method.Analytes[k].Analyte] = k;
+            }
+
+            for (int k = 0; k < run.InternalStandards.Count; k++)
+            {
+                _isIndex[run.InternalStandards[k]] = k;
+            }
+
+            _sortedAnalytes = _analyteIndex.Keys.ToArray();
+            Array.Sort(_sortedAnalytes, StringComparer.Ordinal);
+            _sortedToIndex = _sortedAnalytes.Select(n => _analyteIndex[n]).ToArray();
             foreach (RunInjection r in run.Injections)
             {
-                _rows[r.Order] = new RowState(r);
+                _rows[r.Order] = new RowState(r, _analyteIndex, run.InternalStandards);
             }
 
             // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
             _samples = run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
+            _sampleOrders = _samples.Select(g => (IReadOnlyList<int>)Array.AsReadOnly(g.Select(r => r.Order).ToArray())).ToList();
+            for (int i = 0; i < _samples.Count; i++)
+            {
+                _samplePosition.Add(_samples[i][0].Id, i);
+            }
         }
 
         internal IReadOnlyDictionary<string, double?> References => _references;
@@ -268,35 +423,20 @@ public static class RunProcessor
             }
         }
 
-        internal static void PairChecks(RunMethod method, List<ResultBuilder> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        // perAnalyte: each method analyte's results, in the order of _samples, so a parent is found by its id's position.
+        internal void PairChecks(List<List<ResultBuilder>> perAnalyte, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
-            // Results by analyte, then by id (insertion order kept), in one pass instead of one filter per analyte.
-            var byAnalyte = new Dictionary<string, Dictionary<string, ResultBuilder>>(StringComparer.Ordinal);
-            foreach (ResultBuilder r in results)
+            for (int k = 0; k < perAnalyte.Count; k++)
             {
-                if (!byAnalyte.TryGetValue(r.Analyte, out Dictionary<string, ResultBuilder>? ids))
+                AnalyteMethod a = _method.Analytes[k];
+                List<ResultBuilder> byPosition = perAnalyte[k];
+                foreach (ResultBuilder d in byPosition.Where(r => r.Role == InjectionRole.SampleDuplicate))
                 {
-                    ids = new Dictionary<string, ResultBuilder>(StringComparer.Ordinal);
-                    byAnalyte.Add(r.Analyte, ids);
+                    ResultBuilder parent = byPosition[_samplePosition[d.Rows[0].ParentId!]];
+                    duplicates.Add(Duplicate(a.Analyte, parent, d, _method.DuplicateRpd));
                 }
 
-                ids.Add(r.Id, r);
-            }
-
-            foreach (AnalyteMethod a in method.Analytes)
-            {
-                if (!byAnalyte.TryGetValue(a.Analyte, out Dictionary<string, ResultBuilder>? byId))
-                {
-                    continue;
-                }
-
-                foreach (ResultBuilder d in byId.Values.Where(r => r.Role == InjectionRole.SampleDuplicate))
-                {
-                    ResultBuilder parent = byId[d.Rows[0].ParentId!];
-                    duplicates.Add(Duplicate(a.Analyte, parent, d, method.DuplicateRpd));
-                }
-
-                foreach (ResultBuilder s in byId.Values.Where(r => r.Role == InjectionRole.SpikedSample))
+                foreach (ResultBuilder s in byPosition.Where(r => r.Role == InjectionRole.SpikedSample))
                 {
                     RunInjection row = s.Rows[0];
                     if (!row.Added.TryGetValue(a.Analyte, out Concentration added))
@@ -305,7 +445,7 @@ public static class RunProcessor
                         continue;
                     }
 
-                    spikes.Add(Spike(a.Analyte, byId[row.ParentId!], s, added, method.SpikeRecovery));
+                    spikes.Add(Spike(a.Analyte, byPosition[_samplePosition[row.ParentId!]], s, added, _method.SpikeRecovery));
                 }
             }
         }
@@ -345,6 +485,7 @@ public static class RunProcessor
 
         internal AnalyteCalibration Calibrate(AnalyteMethod a)
         {
+            int ai = _analyteIndex[a.Analyte];
             Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
             RunInjection[] calRows = _run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank).ToArray();
             bool rf = a.Model is RatioModel.AverageResponseFactor or RatioModel.SinglePointResponseFactor;
@@ -363,7 +504,7 @@ public static class RunProcessor
                         string why = rf ? "calibration blank not used by a response-factor model." : "no calibration standard carries a nominal concentration of this analyte.";
                         foreach (RunInjection r in level)
                         {
-                            _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                            _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                         }
 
                         continue;
@@ -375,7 +516,7 @@ public static class RunProcessor
                 {
                     foreach (RunInjection r in level)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte in standard '" + r.Id + "'.");
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte in standard '" + r.Id + "'.");
                     }
 
                     continue;
@@ -384,7 +525,7 @@ public static class RunProcessor
                 {
                     foreach (RunInjection r in level)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "nominal 0 (blank) not used by a response-factor model.");
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "nominal 0 (blank) not used by a response-factor model.");
                     }
 
                     continue;
@@ -392,10 +533,10 @@ public static class RunProcessor
 
                 foreach (RunInjection r in level)
                 {
-                    (Injection? inj, string? why) = Signal(r, a);
+                    (Injection? inj, string? why) = Signal(_rows[r.Order], ai, a);
                     if (inj is null)
                     {
-                        _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                        _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                         continue;
                     }
 
@@ -426,15 +567,15 @@ public static class RunProcessor
             {
                 if (calibration is null)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "the calibration could not be made: " + failure);
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "the calibration could not be made: " + failure);
                 }
                 else if (calibration.Standards.FirstOrDefault(s => s.Label == r.Id) is StandardResult s && !s.Included)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "blank left out of the fit by the calibration options (back-calculated for information).");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "blank left out of the fit by the calibration options (back-calculated for information).");
                 }
                 else
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.UsedInCalibration, NonPositive(r, a));
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.UsedInCalibration, NonPositive(_rows[r.Order].AnalyteSignals[ai]));
                 }
             }
 
@@ -443,12 +584,14 @@ public static class RunProcessor
 
         internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
         {
+            int ai = _analyteIndex[a.Analyte];
             var list = new List<ResultBuilder>(_samples.Count);
-            foreach (RunInjection[] g in _samples)
+            for (int i = 0; i < _samples.Count; i++)
             {
-                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g);
-                Quantify(a, cal, b, InjectionStatus.Quantified);
-                if (b.Quantitation is QuantitationResult q)
+                RunInjection[] g = _samples[i];
+                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g, _sampleOrders[i]);
+                Quantify(a, ai, cal, b, InjectionStatus.Quantified);
+                if (b.Estimate is QuantitationEstimate q)
                 {
                     ToSample(b, q);
                     ApplyLimits(a, b);
@@ -462,20 +605,21 @@ public static class RunProcessor
 
         internal List<QualityControlCheck> QualityControl(AnalyteMethod a, AnalyteCalibration cal)
         {
+            int ai = _analyteIndex[a.Analyte];
             var checks = new List<QualityControlCheck>();
             RecoveryWindow? window = _method.QualityControlRecovery;
             foreach (RunInjection r in _run.Injections.Where(r => r.Role == InjectionRole.QualityControl))
             {
                 if (!r.Nominal.TryGetValue(a.Analyte, out Concentration nominal))
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
                     continue;
                 }
 
-                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r });
-                Quantify(a, cal, b, InjectionStatus.QualityControlEvaluated);
+                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r }, Array.Empty<int>());
+                Quantify(a, ai, cal, b, InjectionStatus.QualityControlEvaluated);
                 double? recovery = null;
-                if (b.Quantitation is QuantitationResult q)
+                if (b.Estimate is QuantitationEstimate q)
                 {
                     if (nominal.Kind == q.Concentration.Kind)
                     {
@@ -493,30 +637,35 @@ public static class RunProcessor
                     _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
                 }
 
-                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Quantitation?.Concentration, recovery, window, passed, b.Notes.ToList()));
+                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Estimate?.Concentration, recovery, window, passed, b.Notes));
             }
 
             return checks;
         }
 
-        internal List<InjectionOutcome> Outcomes() =>
-            _run.Injections.Select(r =>
+        internal List<InjectionOutcome> Outcomes()
+        {
+            var outcomes = new List<InjectionOutcome>(_run.Injections.Count);
+            foreach (RunInjection r in _run.Injections)
             {
                 RowState st = _rows[r.Order];
-                var statuses = new SortedDictionary<string, InjectionStatus>(StringComparer.Ordinal);
-                foreach (AnalyteMethod a in _method.Analytes)
+                var statuses = new InjectionStatus[_sortedAnalytes.Length];
+                for (int k = 0; k < statuses.Length; k++)
                 {
-                    statuses[a.Analyte] = st.Statuses.TryGetValue(a.Analyte, out InjectionStatus s) ? s : InjectionStatus.Excluded;
+                    statuses[k] = st.Statuses[_sortedToIndex[k]] ?? InjectionStatus.Excluded;
                 }
 
-                return new InjectionOutcome(r, statuses, st.Recoveries.ToList(), st.Reasons.ToList());
-            }).ToList();
+                outcomes.Add(new InjectionOutcome(r, new AnalyteStatusMap(_sortedAnalytes, statuses), st.Recoveries.ToList(), st.Reasons.ToList()));
+            }
+
+            return outcomes;
+        }
 
         private static DuplicateCheck Duplicate(string analyte, ResultBuilder parent, ResultBuilder dup, RpdLimit? limit)
         {
             var notes = new List<string>();
-            Concentration? a = parent.InSample?.Result.Value;
-            Concentration? b = dup.InSample?.Result.Value;
+            Concentration? a = parent.InSample;
+            Concentration? b = dup.InSample;
             double? rpd = null;
             if (a is Concentration x && b is Concentration y)
             {
@@ -561,8 +710,8 @@ public static class RunProcessor
         private static SpikeCheck Spike(string analyte, ResultBuilder parent, ResultBuilder spiked, Concentration added, RecoveryWindow? window)
         {
             var notes = new List<string>();
-            Concentration? s = spiked.InSample?.Result.Value;
-            Concentration? u = parent.InSample?.Result.Value;
+            Concentration? s = spiked.InSample;
+            Concentration? u = parent.InSample;
             double? recovery = null;
             if (s is Concentration x && u is Concentration y)
             {
@@ -609,31 +758,31 @@ public static class RunProcessor
         private static string OrderText(int order) =>
             order == int.MinValue ? "start of run" : order == int.MaxValue ? "end of run" : Text.I(order);
 
-        private static string? NonPositive(RunInjection r, AnalyteMethod a) =>
-            r.Signals.Analyte(a.Analyte) is double s && s <= 0 ? "analyte signal " + Text.G(s) + " ≤ 0 (used)." : null;
+        private static string? NonPositive(double signal) =>
+            signal <= 0 ? "analyte signal " + Text.G(signal) + " ≤ 0 (used)." : null;
 
-        private static (Injection? Injection, string? Reason) Signal(RunInjection r, AnalyteMethod a)
+        private (Injection? Injection, string? Reason) Signal(RowState st, int ai, AnalyteMethod a)
         {
-            double? signal = r.Signals.Analyte(a.Analyte);
-            double? isSignal = r.Signals.InternalStandard(a.InternalStandard);
-            if (signal is null)
+            double signal = st.AnalyteSignals[ai];
+            double isSignal = st.InternalStandardSignals[_isIndex[a.InternalStandard]];
+            if (double.IsNaN(signal))
             {
                 return (null, "no analyte signal; set aside.");
             }
 
-            if (isSignal is null)
+            if (double.IsNaN(isSignal))
             {
                 return (null, "no signal for IS " + a.InternalStandard + "; set aside.");
             }
 
-            if (!(isSignal.Value > 0))
+            if (!(isSignal > 0))
             {
-                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal.Value) + " ≤ 0 is invalid; set aside.");
+                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal) + " ≤ 0 is invalid; set aside.");
             }
 
             try
             {
-                return (new Injection(signal.Value, isSignal.Value), null);
+                return (new Injection(signal, isSignal), null);
             }
             catch (ArgumentOutOfRangeException e)
             {
@@ -671,12 +820,11 @@ public static class RunProcessor
         // Limits are the method's LOD/LOQ in the original sample (common practice), so they judge InSample.
         private static void ApplyLimits(AnalyteMethod a, ResultBuilder b)
         {
-            if (b.InSample is not SampleResult inSample)
+            if (b.InSample is not Concentration c)
             {
                 return;
             }
 
-            Concentration c = inSample.Result.Value;
             if (a.Limits is not ReportingLimits limits)
             {
                 b.Reported = new ReportedValue(c, ReportedStatus.Quantified, null);
@@ -703,20 +851,22 @@ public static class RunProcessor
             }
         }
 
-        private static void ToSample(ResultBuilder b, QuantitationResult q)
+        // The value and the interval ends carried back without uncertainty budgets (built when the result is asked for one).
+        private static void ToSample(ResultBuilder b, QuantitationEstimate q)
         {
             SamplePreparation prep = b.Rows[0].Preparation;
-            Measured<Concentration> measured = q.AsMeasured() ?? Measured.Exact(q.Concentration);
             try
             {
-                b.InSample = prep.ToSample(measured);
+                Concentration value = prep.ToSampleValue(q.Concentration);
+                Concentration? lower = null, upper = null;
                 if (q.Lower is Concentration lo && q.Upper is Concentration hi)
                 {
-                    b.SampleLower = prep.ToSample(Measured.Exact(lo)).Result.Value;
-                    b.SampleUpper = prep.ToSample(Measured.Exact(hi)).Result.Value;
+                    lower = prep.ToSampleValue(lo);
+                    upper = prep.ToSampleValue(hi);
                 }
 
-                b.Notes.Add("Original sample: " + prep + " → " + b.InSample.Result.Value.ToString("G6", null) + ".");
+                b.InOriginalSample(prep, value, lower, upper);
+                b.Notes.AddOriginalSample();
             }
             catch (ArgumentException e)
             {
@@ -725,7 +875,7 @@ public static class RunProcessor
         }
 
         // Grubbs' test on the ratios of ≥ 3 replicate injections: flags a suspect one, which stays in the mean.
-        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, List<RunInjection> used)
+        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, IReadOnlyList<RunInjection> used)
         {
             if (injections.Count < 3)
             {
@@ -746,24 +896,28 @@ public static class RunProcessor
             _rows[suspect.Order].Reasons.Add(a.Analyte + ": " + text);
         }
 
-        private void Quantify(AnalyteMethod a, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
+        private void Quantify(AnalyteMethod a, int ai, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
         {
-            var injections = new List<Injection>();
-            var used = new List<RunInjection>();
-            foreach (RunInjection r in b.Rows)
+            // Usually every row is valid: then the rows themselves are the rows used.
+            RunInjection[] rows = b.Rows;
+            var injections = new List<Injection>(rows.Length);
+            List<RunInjection>? setAside = null;
+            foreach (RunInjection r in rows)
             {
-                (Injection? inj, string? why) = Signal(r, a);
+                (Injection? inj, string? why) = Signal(_rows[r.Order], ai, a);
                 if (inj is null)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, why);
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                     b.Qualifiers |= ResultQualifiers.MissingOrInvalidSignal;
                     b.Notes.Add("Injection " + Text.I(r.Order) + ": " + why);
+                    (setAside ??= new List<RunInjection>()).Add(r);
                     continue;
                 }
 
                 injections.Add(inj);
-                used.Add(r);
             }
+
+            IReadOnlyList<RunInjection> used = setAside is null ? rows : rows.Where(r => !setAside.Contains(r)).ToList();
 
             if (cal.Calibration is not RatioCalibration calibration)
             {
@@ -771,7 +925,7 @@ public static class RunProcessor
                 b.Notes.Add("Not quantified: no calibration (" + cal.Failure + ").");
                 foreach (RunInjection r in used)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
                 }
 
                 return;
@@ -787,7 +941,8 @@ public static class RunProcessor
             Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
             try
             {
-                b.Quantitation = SampleQuantitation.Quantify(calibration, UnknownSample.Create(b.Id, cIs, injections.ToArray()), _method.ConfidenceLevel, _method.IntervalMethod);
+                UnknownSample sample = UnknownSample.Create(b.Id, cIs, injections.ToArray());
+                b.Quantified(calibration, sample, _method, used, SampleQuantitation.Estimate(calibration, sample, _method.ConfidenceLevel, _method.IntervalMethod));
             }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException)
             {
@@ -795,14 +950,14 @@ public static class RunProcessor
                 b.Notes.Add("Not quantified: " + e.Message);
                 foreach (RunInjection r in used)
                 {
-                    _rows[r.Order].Set(a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
+                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
                 }
 
                 return;
             }
 
-            b.Notes.Add("Injections used: " + string.Join(", ", used.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(b.Quantitation.MeanResponse) + " → " + b.Quantitation.Concentration.ToString("G6", null) + " in the measured solution.");
-            if (b.Quantitation.IsExtrapolated)
+            b.Notes.AddUsedInjections();
+            if (b.Estimate!.Value.IsExtrapolated)
             {
                 b.Qualifiers |= ResultQualifiers.Extrapolated;
             }
@@ -814,11 +969,13 @@ public static class RunProcessor
             }
 
             Outlier(a, b, injections, used);
-            foreach (RunInjection r in used)
+            for (int k = 0; k < used.Count; k++)
             {
+                RunInjection r = used[k];
                 RowState st = _rows[r.Order];
-                st.Set(a.Analyte, success, NonPositive(r, a));
-                if (r.Signals.Analyte(a.Analyte) <= 0)
+                double signal = st.AnalyteSignals[ai];
+                st.Set(ai, a.Analyte, success, NonPositive(signal));
+                if (signal <= 0)
                 {
                     b.Qualifiers |= ResultQualifiers.NonPositiveAnalyteSignal;
                 }

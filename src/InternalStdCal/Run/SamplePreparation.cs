@@ -112,6 +112,23 @@ public sealed class SamplePreparation : IEquatable<SamplePreparation>
         return SampleResult.Liquid(measured, _dilutions);
     }
 
+    /// <summary>The value of <see cref="ToSample"/> for an exact measured value, without building the uncertainty
+    /// budget (same arithmetic, same exceptions).</summary>
+    internal Concentration ToSampleValue(Concentration measured)
+    {
+        if (DigestVolume is Measured<Volume> v && SampleMass is Measured<Mass> m1)
+        {
+            return SampleResult.SolidValue(measured, v, m1, _dilutions, ResultUnit!.Value);
+        }
+
+        if (DigestMass is Measured<Mass> d && SampleMass is Measured<Mass> m2)
+        {
+            return SampleResult.SolidValue(measured, d, m2, _dilutions, ResultUnit!.Value);
+        }
+
+        return SampleResult.LiquidValue(measured, _dilutions);
+    }
+
     /// <inheritdoc />
     public bool Equals(SamplePreparation? other) =>
         other is not null

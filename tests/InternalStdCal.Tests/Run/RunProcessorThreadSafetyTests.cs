@@ -1,7 +1,11 @@
+using System.Collections.Generic;
 using System.Linq;
 using System.Threading.Tasks;
 using InternalStdCal.Calibration;
 using InternalStdCal.IO;
+using InternalStdCal.Limits;
+using InternalStdCal.Preparation;
+using InternalStdCal.Quantities;
 using InternalStdCal.Run;
 using InternalStdCal.Tests.Calibration;
 using InternalStdCal.Tests.IO;
@@ -11,8 +15,9 @@ using Xunit;
 namespace InternalStdCal.Tests.Run;
 
 // Thread safety (common practice for shared immutable results): processing the same run on many threads gives
-// bit-identical results to the serial run, and first use of a fit's lazily computed statistics from many threads
-// gives the serial values. Invented demo run; the check is equality with the serial result.
+// bit-identical results to the serial run, first use of a fit's lazily computed statistics or of a result's
+// deferred quantitation, back-calculation and notes from many threads gives the serial values. Invented demo run;
+// the check is equality with the serial result.
 public class RunProcessorThreadSafetyTests
 {
     [Fact]
@@ -33,6 +38,56 @@ public class RunProcessorThreadSafetyTests
 
         Assert.All(results, r => Assert.Equal(expected, r));
         Assert.All(texts, t => Assert.Equal(expectedText, t));
+    }
+
+    [Fact]
+    public void Process_DeferredPartsFirstReadFromManyThreads_SameInstancesAndEqualToSerialValues()
+    {
+        // Quantitation, sample calculation and notes of a result are built on first read; many threads reading them
+        // first must all get one instance, equal to what a report read on one thread gives.
+        RunReport serial = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+        RunResults expected = RunResults.From(serial);
+        for (int attempt = 0; attempt < 10; attempt++)
+        {
+            RunReport shared = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+            var seen = new (object? Q, object? S, object N)[8][];
+            Parallel.For(0, seen.Length, i => seen[i] = shared.Results.Select(r => ((object?)r.Quantitation, (object?)r.SampleCalculation, (object)r.Notes.ToList())).ToArray());
+            for (int k = 0; k < shared.Results.Count; k++)
+            {
+                Assert.All(seen, s => Assert.Same(seen[0][k].Q, s[k].Q));
+                Assert.All(seen, s => Assert.Same(seen[0][k].S, s[k].S));
+                Assert.All(seen, s => Assert.Equal((List<string>)seen[0][k].N, (List<string>)s[k].N));
+            }
+
+            Assert.Equal(expected, RunResults.From(shared));
+        }
+    }
+
+    [Fact]
+    public void Process_ValuesKeptOnTheResult_EqualTheDeferredQuantitationAndBackCalculation()
+    {
+        // The measured value, interval and original-sample values stored on a result are the ones the full
+        // quantitation and the budgeted back-calculation (built on first read) give, bit for bit.
+        RunReport report = RunResultsJsonTests.ProcessDemo();
+        Assert.Contains(report.Results, r => r.Quantitation is not null && r.SampleLower is not null);
+        foreach (AnalyteResult r in report.Results)
+        {
+            Assert.Equal(r.Quantitation?.Concentration, r.InMeasuredSolution);
+            Assert.Equal(r.Quantitation?.Lower, r.MeasuredLower);
+            Assert.Equal(r.Quantitation?.Upper, r.MeasuredUpper);
+            if (r.Reported is ReportedValue reported)
+            {
+                Assert.Equal(r.SampleCalculation!.Result.Value, reported.Estimate);
+            }
+
+            if (r.SampleCalculation is SampleResult s && r.Quantitation is { Lower: Concentration lo, Upper: Concentration hi })
+            {
+                SamplePreparation prep = report.Run.Injections.First(i => i.Order == r.InjectionOrders[0]).Preparation;
+                Assert.Equal(prep.ToSample(Measured.Exact(lo)).Result.Value, r.SampleLower);
+                Assert.Equal(prep.ToSample(Measured.Exact(hi)).Result.Value, r.SampleUpper);
+                Assert.Equal(prep.ToSample(r.Quantitation.AsMeasured()!.Value).Result, s.Result);
+            }
+        }
     }
 
     [Fact]
