@@ -81,11 +81,12 @@ public readonly struct LineFit
     /// <summary>Fitted response a + b·x, with compensated arithmetic (y units).</summary>
     /// <param name="x">Concentration (x units); finite.</param>
     /// <returns>ŷ(x).</returns>
-    /// <exception cref="ArgumentOutOfRangeException"><paramref name="x"/> is not finite.</exception>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="x"/> is not finite, or ŷ overflows.</exception>
     public double Predict(double x)
     {
         Guard.Finite(x, nameof(x));
-        return -Residual(Intercept, Slope, x, 0);
+        double y = -Residual(Intercept, Slope, x, 0);
+        return double.IsNaN(y) || double.IsInfinity(y) ? throw Guard.OutOfRange(nameof(x), x, "small enough in magnitude that the fitted response is finite") : y;
     }
 
     /// <summary>
@@ -108,7 +109,7 @@ public readonly struct LineFit
 
         Guard.SameLength(Count, x.Length, nameof(Count), nameof(x));
         Guard.SameLength(Count, y.Length, nameof(Count), nameof(y));
-        ResidualSums(x, y, out double rss, out _);
+        ResidualSums(x, y, 1.0, out double rss, out _);
         return Math.Sqrt(rss / DegreesOfFreedom);
     }
 
@@ -127,15 +128,15 @@ public readonly struct LineFit
         Weighting.PointWeightOrNaN(index, x, y) * _weightScale * _weightNormaliser;
 
     /// <summary>Σw(y − ŷ)² (compensated residuals) and Σw(y − ȳw)², normalised weights; the data are the fit's.</summary>
-    internal void ResidualSums(ReadOnlySpan<double> x, ReadOnlySpan<double> y, out double residualSumOfSquares, out double totalSumOfSquares)
+    internal void ResidualSums(ReadOnlySpan<double> x, ReadOnlySpan<double> y, double scale, out double residualSumOfSquares, out double totalSumOfSquares)
     {
         double rss = 0, total = 0;
         for (int i = 0; i < x.Length; i++)
         {
             double xi = x[i], yi = y[i], w = NormalisedWeight(i, xi, yi);
-            double weighted = Math.Sqrt(w) * Residual(Intercept, Slope, xi, yi);
+            double weighted = Math.Sqrt(w) * Residual(Intercept, Slope, xi, yi) * scale;
             rss += weighted * weighted;
-            double d = yi - WeightedMeanY;
+            double d = (yi - WeightedMeanY) * scale;
             total += w * d * d;
         }
 

@@ -290,7 +290,9 @@ public sealed class RegressionFit
     /// </summary>
     public double ResidualStandardDeviation => Statistics()._residualStandardDeviation;
 
-    /// <summary>Residual sum of squares Σw(y − ŷ)² with normalised weights (y units²).</summary>
+    /// <summary>Residual sum of squares Σw(y − ŷ)² with normalised weights (y units²); +∞ only when the sum exceeds
+    /// the double range (residuals beyond ~1e154), while <see cref="ResidualStandardDeviation"/> and
+    /// <see cref="RSquared"/> stay finite.</summary>
     public double ResidualSumOfSquares => Statistics()._residualSumOfSquares;
 
     /// <summary>
@@ -955,31 +957,49 @@ public sealed class RegressionFit
             return this;
         }
 
-        int n = Count;
-        bool origin = Model == CalibrationModel.LinearThroughOrigin;
-        double rss = 0, total = 0;
-        if (Model == CalibrationModel.Linear)
-        {
-            ToLineFit().ResidualSums(_x, _y, out rss, out total);
-        }
-        else
-        {
-            for (int i = 0; i < n; i++)
-            {
-                double x = _x[i], y = _y[i], w = W(i);
-                double weighted = Math.Sqrt(w) * CompensatedResidual(x, y);
-                rss += weighted * weighted;
-                double d = origin ? y : y - _meanY;
-                total += w * d * d;
-            }
-        }
-
+        (double rss, double total) = ResidualSums(1.0);
         _residualSumOfSquares = rss;
         _residualStandardDeviation = Math.Sqrt(rss / DegreesOfFreedom);
+        if (double.IsInfinity(rss) || double.IsInfinity(total))
+        {
+            // Residuals beyond ~1e154: the sums of squares overflow, so s and R² come from residuals scaled by 2^-600
+            // (exact); Σw·r² itself stays +∞ (documented on ResidualSumOfSquares).
+            (double scaledRss, double scaledTotal) = ResidualSums(PowerOfTwoDown);
+            _residualStandardDeviation = Math.Sqrt(scaledRss / DegreesOfFreedom) * PowerOfTwoUp;
+            rss = scaledRss;
+            total = scaledTotal;
+        }
+
         _rSquared = total > 0 ? Math.Min(1.0, Math.Max(0.0, 1 - (rss / total))) : 0.0;
         _correlation = Model == CalibrationModel.Quadratic ? Math.Sqrt(_rSquared) : Math.Sign(Slope) * Math.Sqrt(_rSquared);
         Volatile.Write(ref _statisticsReady, 1);
         return this;
+    }
+
+    private const double PowerOfTwoDown = 2.409919865102884e-181; // 2^-600
+    private const double PowerOfTwoUp = 4.149515568880993e180; // 2^600
+
+    /// <summary>Σw·(c·r)² and Σw·(c·(y − ȳw))² with normalised weights, for a scale c (1, or a power of two).</summary>
+    private (double Rss, double Total) ResidualSums(double scale)
+    {
+        double rss = 0, total = 0;
+        if (Model == CalibrationModel.Linear)
+        {
+            ToLineFit().ResidualSums(_x, _y, scale, out rss, out total);
+            return (rss, total);
+        }
+
+        bool origin = Model == CalibrationModel.LinearThroughOrigin;
+        for (int i = 0; i < Count; i++)
+        {
+            double x = _x[i], y = _y[i], w = W(i);
+            double weighted = Math.Sqrt(w) * CompensatedResidual(x, y) * scale;
+            rss += weighted * weighted;
+            double d = (origin ? y : y - _meanY) * scale;
+            total += w * d * d;
+        }
+
+        return (rss, total);
     }
 
     /// <summary>t((1 + P)/2, n − p); the value for P = 0.95 is kept after its first use.</summary>

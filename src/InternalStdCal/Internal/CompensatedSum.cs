@@ -63,8 +63,21 @@ internal struct CompensatedSum
     }
 
 #if !NET
+    // Above 2^996 the product Splitter·a would overflow: split a·2^-28 and scale back (exact, powers of two).
+    private const double SplitLimit = 6.69692879491417e299; // 2^996
+    private const double Down = 3.7252902984619140625e-9; // 2^-28
+    private const double Up = 268435456.0; // 2^28
+
     private static (double High, double Low) Split(double a)
     {
+        if (Math.Abs(a) > SplitLimit)
+        {
+            double scaled = a * Down;
+            double cs = Splitter * scaled;
+            double hs = cs - (cs - scaled);
+            return (hs * Up, (scaled - hs) * Up);
+        }
+
         double c = Splitter * a;
         double high = c - (c - a);
         return (high, a - high);

@@ -91,6 +91,8 @@ public class CalibrationBadInputTests
         new("Calibration.RegressionFit.Fit", "custom weights for another count", () => RegressionFit.Fit(X, Y, CalibrationModel.Linear, Weighting.Custom(new[] { 1.0, 1, 1 })), Arg, "weighting", "3 values", "one per point"),
         new("Calibration.RegressionFit.Fit", "1/x with x = 0", () => RegressionFit.Fit(new[] { 0.0, 1, 2, 3 }, new[] { 0.1, 1, 2, 3 }, CalibrationModel.Linear, Weighting.InverseX), Arg, "x", "x = 0", "1/x needs x > 0"),
         new("Calibration.RegressionFit.Predict", "NaN", () => Line.Predict(double.NaN), Range, "x", "NaN", Finite),
+        new("Calibration.LineFit.Predict", "NaN", () => RegressionFit.FitLine(X, Y).Predict(double.NaN), Range, "x", "NaN", Finite),
+        new("Calibration.LineFit.Predict", "ŷ overflows", () => RegressionFit.FitLine(X, Y).Predict(double.MaxValue), Range, "x", "1.79", "fitted response is finite"),
         new("Calibration.RegressionFit.Sensitivity", "+inf", () => Line.Sensitivity(double.PositiveInfinity), Range, "x", "Infinity", Finite),
         new("Calibration.RegressionFit.MeanResponseStandardError", "-inf", () => Line.MeanResponseStandardError(double.NegativeInfinity), Range, "x", "-Infinity", Finite),
         new("Calibration.RegressionFit.Covariance", "index 2 of a line", () => Line.Covariance(0, 2), Range, "j", "2"),
@@ -154,11 +156,19 @@ public class CalibrationBadInputTests
         AssertRejected(c);
     }
 
-    [Fact(Skip = "Known library bug, not fixed here (RegressionFit.cs is being reworked for performance): the residual standard deviation of a quadratic fit with y ~ 1e300 overflows to +∞ instead of being finite or refused.")]
-    public void Fit_QuadraticWithResponsesNear1e300_ResidualStandardDeviationFinite()
+    [Theory]
+    [InlineData(CalibrationModel.Linear)]
+    [InlineData(CalibrationModel.LinearThroughOrigin)]
+    [InlineData(CalibrationModel.Quadratic)]
+    public void Fit_ResponsesNear1e300_ResidualStandardDeviationAndRSquaredFiniteAndScaled(CalibrationModel model)
     {
-        RegressionFit f = RegressionFit.Fit(X, Y.Select(v => v * 1e300).ToArray(), CalibrationModel.Quadratic);
+        // Scaling y by a power of two scales s exactly and leaves R² unchanged (scale equivariance of least squares).
+        const double Scale = 1.0715086071862673e301; // 2^1000
+        RegressionFit f = RegressionFit.Fit(X, Y.Select(v => v * (Scale / 16)).ToArray(), model);
+        RegressionFit g = RegressionFit.Fit(X, Y, model);
         Assert.True(double.IsFinite(f.ResidualStandardDeviation));
+        Assert.Equal(g.ResidualStandardDeviation * (Scale / 16), f.ResidualStandardDeviation, 1e-9 * f.ResidualStandardDeviation);
+        Assert.Equal(g.RSquared, f.RSquared, 1e-12);
     }
 
     [Theory]
