@@ -3,7 +3,7 @@
 # Usage: scripts/mutation.sh all                     every file of src/InternalStdCal
 #        scripts/mutation.sh Quantities [Limits ...] only the named folders (namespaces), in one run
 # Folders: Quantities Preparation Calibration Quantitation Limits Uncertainty Decisions Internal Run.
-# Reports (html, json) go to StrykerOutput/<targets>/<timestamp>/reports/. Exit code 2 when the score is below
+# Reports (html, json) go to StrykerOutput/<targets>/reports/ (overwritten by the next run of the same targets). Exit code 2 when the score is below
 # the break threshold (85 %). Stryker copies mutated binaries into the test project's bin/ while it runs: do not
 # run `dotnet test` in the same checkout meanwhile.
 set -euo pipefail
