@@ -158,4 +158,26 @@ public class ReplicatesPlannerTests
     }
 
     private static Concentration MgL(double value) => Concentration.FromMilligramsPerLitre(value);
+
+    // Field-reference §8.2 (COMPUTED): δ/σ = 2, power 0.95 → normal approximation n = 2.71; the plan names the limit,
+    // the expected mean and σ, and which way the test is expected to decide (lower limit: a mean below it is beyond).
+    [Fact]
+    public void ToString_ExpectedMeanPlan_NamesLimitMeanAndSigma()
+    {
+        string compliant = ReplicatesPlanner.ForExpectedMean(UpperTen, MgL(9), MgL(0.5), 0.05, 0.95).ToString();
+        Assert.StartsWith("5 replicates give power ", compliant, StringComparison.Ordinal);
+        Assert.Contains(" (4 give ", compliant, StringComparison.Ordinal);
+        Assert.EndsWith(
+            " to show compliance with the upper limit 10 mg/L in a one-sided t test at α = 0.05 (δ/σ = 2, expected mean 9 mg/L, σ = 0.5 mg/L; target power 0.95; normal approximation n = 2.71).",
+            compliant,
+            StringComparison.Ordinal);
+
+        ReplicatePlan lower = ReplicatesPlanner.ForExpectedMean(SpecificationLimit.Lower(MgL(10)), MgL(9), MgL(0.5), 0.05, 0.95);
+        Assert.Equal(ComplianceOutcome.NonCompliant, lower.ExpectedOutcome);
+        Assert.Contains(" to show non-compliance with the lower limit 10 mg/L in", lower.ToString(), StringComparison.Ordinal);
+        Assert.Equal(ComplianceOutcome.Compliant, ReplicatesPlanner.ForExpectedMean(SpecificationLimit.Lower(MgL(10)), MgL(11), MgL(0.5), 0.05, 0.95).ExpectedOutcome);
+        Assert.Equal(0, lower.AlreadyMeasured);
+        Assert.DoesNotContain("measured so far", lower.ToString(), StringComparison.Ordinal);
+        Assert.EndsWith(" 2 measured so far: 3 more.", lower.WithAlreadyMeasured(2).ToString(), StringComparison.Ordinal);
+    }
 }

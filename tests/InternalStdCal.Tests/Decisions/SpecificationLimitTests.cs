@@ -33,4 +33,19 @@ public class SpecificationLimitTests
         Assert.Equal("name", ex.ParamName);
         Assert.Throws<ArgumentNullException>(() => SpecificationLimit.Lower(Concentration.FromMilligramsPerLitre(5), null!));
     }
+
+    // Equality by direction, value and name (documented on SpecificationLimit); printed form without a name.
+    [Fact]
+    public void Equals_EachComponent_Matters()
+    {
+        Concentration c = Concentration.FromMilligramsPerLitre(5);
+        Assert.Equal("lower limit 5 mg/L", SpecificationLimit.Lower(c).ToString());
+        Assert.Equal("upper limit 5 mg/L", SpecificationLimit.Upper(c).ToString());
+        Assert.False(SpecificationLimit.Upper(c).Equals(SpecificationLimit.Upper(Concentration.FromMilligramsPerLitre(6))));
+        Assert.False(SpecificationLimit.Upper(c, "a").Equals(SpecificationLimit.Upper(c, "b")));
+        Assert.True(SpecificationLimit.Upper(c, "a").Equals((object)SpecificationLimit.Upper(c, "a")));
+        Assert.Equal(SpecificationLimit.Upper(c, "a").GetHashCode(), SpecificationLimit.Upper(c, "a").GetHashCode());
+        Assert.False(SpecificationLimit.Upper(c).Equals((SpecificationLimit?)null));
+        Assert.False(SpecificationLimit.Upper(c).Equals((object)c));
+    }
 }
