@@ -105,13 +105,13 @@ public class DecisionRuleTextTests
     {
         string text = DecisionRule.SimpleAcceptance.Assess(UpperTen, Measured.Exact(Mg(9))).ToString();
         Assert.Equal(
-            "Compliant: result 9 mg/L is at or below the decision limit 10 mg/L (upper limit 10 mg/L). Rule: Simple acceptance (w = 0); u = 0 mg/L. "
+            "Compliant: result 9 mg/L is at or below the decision limit 10 mg/L of the upper limit 10 mg/L. Rule: Simple acceptance (w = 0); u = 0 mg/L. "
             + "P(true value > limit) = 0 % (zero uncertainty: result taken as exact).",
             text);
 
         string lower = DecisionRule.SimpleAcceptance.Assess(LowerTen, Measured.Exact(Mg(9))).ToString();
         Assert.Equal(
-            "Non-compliant: result 9 mg/L is below the decision limit 10 mg/L (lower limit 10 mg/L). Rule: Simple acceptance (w = 0); u = 0 mg/L. "
+            "Non-compliant: result 9 mg/L is below the decision limit 10 mg/L of the lower limit 10 mg/L. Rule: Simple acceptance (w = 0); u = 0 mg/L. "
             + "P(true value < limit) = 100 % (zero uncertainty: result taken as exact).",
             lower);
     }
@@ -126,7 +126,7 @@ public class DecisionRuleTextTests
     {
         ComplianceDecision d = DecisionRule.ExpandedUncertaintyGuardBand(DecisionMode.NonBinary).Assess(UpperTen, Measured.WithStandardUncertainty(Mg(x), Mg(0.5)), Coverage.WithFactor(2));
         string text = d.ToString();
-        Assert.StartsWith(start + " (upper limit 10 mg/L). Rule: Guard band w = U, non-binary (ILAC G8 zones); u = 0.5 mg/L, U = 1 mg/L (k = 2), w = 2·u = 1 mg/L, (x − L)/u = ", text, StringComparison.Ordinal);
+        Assert.StartsWith(start + " of the upper limit 10 mg/L. Rule: Guard band w = U, non-binary (ILAC G8 zones); u = 0.5 mg/L, U = 1 mg/L (k = 2), w = 2·u = 1 mg/L, (x − L)/u = ", text, StringComparison.Ordinal);
         Assert.EndsWith(" (normal).", text, StringComparison.Ordinal);
     }
 
@@ -136,12 +136,12 @@ public class DecisionRuleTextTests
     {
         DecisionRule rule = DecisionRule.ExpandedUncertaintyGuardBand(DecisionMode.NonBinary);
         string pass = rule.Assess(LowerTen, Measured.WithStandardUncertainty(Mg(11.5), Mg(0.5)), Coverage.WithFactor(2)).ToString();
-        Assert.StartsWith("Compliant (zone: pass): result 11.5 mg/L is at or above the acceptance limit 11 mg/L (lower limit 10 mg/L).", pass, StringComparison.Ordinal);
+        Assert.StartsWith("Compliant (zone: pass): result 11.5 mg/L is at or above the acceptance limit 11 mg/L of the lower limit 10 mg/L.", pass, StringComparison.Ordinal);
         Assert.Contains(", (x − L)/u = 3.", pass, StringComparison.Ordinal);
         Assert.Contains("P(true value < limit) = ", pass, StringComparison.Ordinal);
 
         string fail = rule.Assess(LowerTen, Measured.WithStandardUncertainty(Mg(8.5), Mg(0.5)), Coverage.WithFactor(2)).ToString();
-        Assert.StartsWith("Non-compliant (zone: fail): result 8.5 mg/L is below the rejection limit 9 mg/L (lower limit 10 mg/L).", fail, StringComparison.Ordinal);
+        Assert.StartsWith("Non-compliant (zone: fail): result 8.5 mg/L is below the rejection limit 9 mg/L of the lower limit 10 mg/L.", fail, StringComparison.Ordinal);
         Assert.Contains(", (x − L)/u = -3.", fail, StringComparison.Ordinal);
     }
 
@@ -153,7 +153,7 @@ public class DecisionRuleTextTests
             .Assess(UpperTen, Measured.WithStandardUncertainty(Mg(11.5), Mg(0.5)), Coverage.WithFactor(2));
         Assert.Equal(ComplianceOutcome.NonCompliant, d.Outcome);
         Assert.Null(d.Zone);
-        Assert.StartsWith("Non-compliant: result 11.5 mg/L is above the decision limit 11 mg/L (upper limit 10 mg/L).", d.ToString(), StringComparison.Ordinal);
+        Assert.StartsWith("Non-compliant: result 11.5 mg/L is above the decision limit 11 mg/L of the upper limit 10 mg/L.", d.ToString(), StringComparison.Ordinal);
     }
 
     // A replicate mean states s as well as u = s/√n (standard statistics); field-reference §8.2 replicates.
