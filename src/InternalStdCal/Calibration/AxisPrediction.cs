@@ -2,29 +2,28 @@ using System.Collections.Generic;
 
 namespace InternalStdCal.Calibration;
 
-/// <summary>An inverse prediction on the calibration axis (before conversion to a sample concentration).</summary>
+/// <summary>An inverse prediction on the calibration axis (before conversion to a sample concentration): the
+/// numbers of an <see cref="AxisEstimate"/> with the method text and notes.</summary>
 internal sealed class AxisPrediction
 {
-    internal AxisPrediction(double x, double? standardError, double? lower, double? upper, double? degreesOfFreedom, string method, IReadOnlyList<string> notes)
+    internal AxisPrediction(AxisEstimate estimate, string method, IReadOnlyList<string> notes)
     {
-        X = x;
-        StandardError = standardError;
-        Lower = lower;
-        Upper = upper;
-        DegreesOfFreedom = degreesOfFreedom;
+        Estimate = estimate;
         Method = method;
         Notes = notes;
     }
 
-    internal double X { get; }
+    internal AxisEstimate Estimate { get; }
 
-    internal double? StandardError { get; }
+    internal double X => Estimate.X;
 
-    internal double? Lower { get; }
+    internal double? StandardError => Estimate.StandardError;
 
-    internal double? Upper { get; }
+    internal double? Lower => Estimate.Lower;
 
-    internal double? DegreesOfFreedom { get; }
+    internal double? Upper => Estimate.Upper;
+
+    internal double? DegreesOfFreedom => Estimate.DegreesOfFreedom;
 
     internal string Method { get; }
 

@@ -207,11 +207,11 @@ public sealed class RegressionCalibration : RatioCalibration
             else
             {
                 notes.Add("Fieller's interval is unbounded: the slope is not significantly different from 0 at this confidence level (g ≥ 1).");
-                return new AxisPrediction(e.X, e.StandardError, null, null, e.DegreesOfFreedom, formula + "; Fieller interval unbounded", notes);
+                return new AxisPrediction(e, formula + "; Fieller interval unbounded", notes);
             }
         }
 
-        return new AxisPrediction(e.X, e.StandardError, e.Lower, e.Upper, e.DegreesOfFreedom, formula + "; " + how, notes);
+        return new AxisPrediction(e, formula + "; " + how, notes);
     }
 
     internal override AxisEstimate EstimateAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)

@@ -143,10 +143,10 @@ public sealed class ResponseFactorCalibration : RatioCalibration
         if (e.StandardError is null)
         {
             notes.Add("Single response factor: no spread is available, so no standard error or interval.");
-            return new AxisPrediction(e.X, null, null, null, null, "mean response factor (no spread)", notes);
+            return new AxisPrediction(e, "mean response factor (no spread)", notes);
         }
 
-        return new AxisPrediction(e.X, e.StandardError, e.Lower, e.Upper, e.DegreesOfFreedom, "mean response factor, relative SD of the RFs: s = C·RSD·sqrt(1/m + 1/n)", notes);
+        return new AxisPrediction(e, "mean response factor, relative SD of the RFs: s = C·RSD·sqrt(1/m + 1/n)", notes);
     }
 
     internal override AxisEstimate EstimateAxis(double meanRatio, int replicates, double confidenceLevel, InverseIntervalMethod method)
