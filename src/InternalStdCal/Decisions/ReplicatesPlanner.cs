@@ -204,7 +204,7 @@ public static class ReplicatesPlanner
             // Power rises with n: gallop up to a passing n, then bisect between the last failing and it.
             int failing = n;
             int step = 1;
-            int passing;
+            int passing = MaxReplicates;
             while (true)
             {
                 int candidate = (int)Math.Min(MaxReplicates, (long)failing + step);

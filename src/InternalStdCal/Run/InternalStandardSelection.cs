@@ -215,7 +215,8 @@ public sealed class InternalStandardSelection
             .Append(Text.Pad("p(less)", 10)).AppendLine("verdict");
         foreach (InternalStandardSelectionAssessment c in Candidates)
         {
-            if (c.Statistics is not InternalStandardSelectionStatistics s)
+            InternalStandardSelectionStatistics? s = c.Statistics;
+            if (s is null)
             {
                 continue;
             }
@@ -223,7 +224,7 @@ public sealed class InternalStandardSelection
             sb.Append("  ").Append(Text.Pad(Text.I(c.Rank!.Value), 6)).Append(Text.Pad(c.Name, 16)).Append(Text.Pad(Text.F(s.CandidateRsdPercent, 3), 10))
                 .Append(Text.Pad(Text.F(s.RatioRsdPercent, 3), 13)).Append(Text.Pad(Text.Signed(s.RsdChangePercent, 1), 10))
                 .Append(Text.Pad(Text.F(s.LogCorrelation, 3), 9)).Append(Text.Pad(Text.F(s.CorrelationThreshold, 3), 8))
-                .Append(Text.Pad(s.PitmanMorganT is double t ? Text.F(t, 3) : "unbounded", 11)).Append(Text.Pad(s.ImprovementPValue < 1e-4 ? "<0.0001" : Text.F(s.ImprovementPValue, 4), 10))
+                .Append(Text.Pad(s.PitmanMorganT.HasValue ? Text.F(s.PitmanMorganT.Value, 3) : "unbounded", 11)).Append(Text.Pad(s.ImprovementPValue < 1e-4 ? "<0.0001" : Text.F(s.ImprovementPValue, 4), 10))
                 .AppendLine(VerdictText(c.Verdict));
         }
 
