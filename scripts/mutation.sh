@@ -3,6 +3,8 @@
 # Usage: scripts/mutation.sh all                     every file of src/InternalStdCal
 #        scripts/mutation.sh Quantities [Limits ...] only the named folders (namespaces), in one run
 # Folders: Quantities Preparation Calibration Quantitation Limits Uncertainty Decisions Internal Run.
+# Project mode: Stryker runs from src/InternalStdCal against tests/InternalStdCal.Tests only (the netstandard2.0
+# and notebook test projects would add a second, slower host per mutant without new assertions).
 # Reports (html, json) go to StrykerOutput/<targets>/reports/ (overwritten by the next run of the same targets). Exit code 2 when the score is below
 # the break threshold (85 %). Stryker copies mutated binaries into the test project's bin/ while it runs: do not
 # run `dotnet test` in the same checkout meanwhile.
@@ -27,5 +29,7 @@ name=$(IFS=+; echo "$*")
 
 dotnet tool restore >/dev/null
 # Without --mutate, stryker-config.json's pattern (every file of src/InternalStdCal) applies.
-exec dotnet stryker --config-file stryker-config.json --skip-version-check \
-  --output "StrykerOutput/$name" "${mutate[@]}"
+root=$(pwd)
+cd src/InternalStdCal
+exec dotnet stryker --config-file "$root/stryker-config.json" --skip-version-check \
+  --output "$root/StrykerOutput/$name" "${mutate[@]}"
