@@ -122,7 +122,7 @@ internal static class LineFitKernel
         if (refined)
         {
             // a = m + α − b·c plus the refinement's corrections, compensated.
-            (double deltaB, double deltaAlpha) = Refine(x, y, weights, weightScale, c, m, s.Sw, line);
+            (double deltaB, double deltaAlpha) = Refine(x, y, weights, weightScale, c, m, s.Sw, line, path);
             var a = default(CompensatedSum);
             a.Add(m);
             a.Add(line.ShiftY - (b * line.ShiftX) + deltaAlpha);
@@ -412,27 +412,119 @@ internal static class LineFitKernel
     /// <summary>
     /// One step of iterative refinement in closed form: residuals about the provisional line ŷ − m = α + b·(x − c)
     /// with x − c and y − m split exactly (TwoSum) and b·(x − c) taken exactly (TwoProduct), so each residual
-    /// carries one rounding; returns their least-squares correction (δb, δα).
+    /// carries one rounding; returns their least-squares correction (δb, δα). Σw·r and Σw·r·dx are formed in the
+    /// four lanes of <see cref="SumPath"/> (TwoProduct's error term is exact on every target, so all agree).
     /// </summary>
-    private static (double DeltaB, double DeltaAlpha) Refine<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m, double sw, in Solution line)
+    private static (double DeltaB, double DeltaAlpha) Refine<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m, double sw, in Solution line, SumPath path)
         where TWeight : struct, IPointWeight
     {
-        double b = line.Slope, alpha = line.ShiftY - (b * line.ShiftX), swr = 0, swdxr = 0;
-        for (int i = 0; i < x.Length; i++)
-        {
-            double xi = x[i], yi = y[i];
-            double w = weights.At(i, xi, yi) * weightScale;
-            double dx = xi - c, dy = yi - m, bdx = b * dx;
-            double r = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
-                + CompensatedSum.SumError(yi, -m, dy) - (b * CompensatedSum.SumError(xi, -c, dx)) - alpha;
-            double wr = w * r;
-            swr += wr;
-            swdxr += wr * dx;
-        }
-
+        double b = line.Slope, alpha = line.ShiftY - (b * line.ShiftX);
+#if NET8_0_OR_GREATER
+        (double swr, double swdxr) = x.Length >= 4 && path == SumPath.Widest && Vector256.IsHardwareAccelerated && Fma.IsSupported
+            ? Residuals256(x, y, weights, weightScale, c, m, b, alpha)
+            : ResidualsScalar(x, y, weights, weightScale, c, m, b, alpha);
+#else
+        (double swr, double swdxr) = ResidualsScalar(x, y, weights, weightScale, c, m, b, alpha);
+#endif
         double deltaB = (swdxr - (line.ShiftX * swr)) / line.Sxx;
         return (deltaB, (swr / sw) - (line.ShiftX * deltaB));
     }
+
+    /// <summary>Σw·r and Σw·r·dx of the refinement, four lanes one double at a time.</summary>
+    private static (double Swr, double Swdxr) ResidualsScalar<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m, double b, double alpha)
+        where TWeight : struct, IPointWeight
+    {
+        int n = x.Length, i = 0;
+        double r0 = 0, r1 = 0, r2 = 0, r3 = 0, d0 = 0, d1 = 0, d2 = 0, d3 = 0;
+        for (; i <= n - 4; i += 4)
+        {
+            AddResidual(ref r0, ref d0, i, x, y, weights, weightScale, c, m, b, alpha);
+            AddResidual(ref r1, ref d1, i + 1, x, y, weights, weightScale, c, m, b, alpha);
+            AddResidual(ref r2, ref d2, i + 2, x, y, weights, weightScale, c, m, b, alpha);
+            AddResidual(ref r3, ref d3, i + 3, x, y, weights, weightScale, c, m, b, alpha);
+        }
+
+        // The r = n − i remaining points: point n − 4 + k goes to lane k (k ≥ 4 − r), as in Accumulate.
+        int r = n - i;
+        if (r == 3)
+        {
+            AddResidual(ref r1, ref d1, n - 3, x, y, weights, weightScale, c, m, b, alpha);
+        }
+
+        if (r >= 2)
+        {
+            AddResidual(ref r2, ref d2, n - 2, x, y, weights, weightScale, c, m, b, alpha);
+        }
+
+        if (r >= 1)
+        {
+            AddResidual(ref r3, ref d3, n - 1, x, y, weights, weightScale, c, m, b, alpha);
+        }
+
+        return ((r0 + r2) + (r1 + r3), (d0 + d2) + (d1 + d3));
+    }
+
+    /// <summary>Adds w·r and w·r·dx of point <paramref name="i"/> to one lane.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void AddResidual<TWeight>(ref double swr, ref double swdxr, int i, ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m, double b, double alpha)
+        where TWeight : struct, IPointWeight
+    {
+        double xi = x[i], yi = y[i];
+        double w = weights.At(i, xi, yi) * weightScale;
+        double dx = xi - c, dy = yi - m, bdx = b * dx;
+        double res = (dy - bdx) - CompensatedSum.ProductError(b, dx, bdx)
+            + CompensatedSum.SumError(yi, -m, dy) - (b * CompensatedSum.SumError(xi, -c, dx)) - alpha;
+        double wr = w * res;
+        swr += wr;
+        swdxr += wr * dx;
+    }
+
+#if NET8_0_OR_GREATER
+    /// <summary>Σw·r and Σw·r·dx of the refinement in 256-bit vectors (TwoProduct's error by fused multiply-add).</summary>
+    private static (double Swr, double Swdxr) Residuals256<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m, double b, double alpha)
+        where TWeight : struct, IPointWeight
+    {
+        int n = x.Length, i = 0;
+        ref double xs = ref MemoryMarshal.GetReference(x);
+        ref double ys = ref MemoryMarshal.GetReference(y);
+        Vector256<double> vc = Vector256.Create(c), vm = Vector256.Create(m), negC = Vector256.Create(-c), negM = Vector256.Create(-m);
+        Vector256<double> vb = Vector256.Create(b), va = Vector256.Create(alpha), scale = Vector256.Create(weightScale);
+        Vector256<double> swr = Vector256<double>.Zero, swdxr = swr;
+        for (; i <= n - 4; i += 4)
+        {
+            Vector256<double> xi = Vector256.LoadUnsafe(ref xs, (nuint)i), yi = Vector256.LoadUnsafe(ref ys, (nuint)i);
+            (Vector256<double> wr, Vector256<double> wrdx) = WeightedResidual(xi, yi, weights.At(i, xi, yi) * scale, vc, vm, negC, negM, vb, va);
+            swr += wr;
+            swdxr += wrdx;
+        }
+
+        if (i < n)
+        {
+            int start = n - 4;
+            Vector256<double> take = Vector256.GreaterThanOrEqual(Vector256.Create(0L, 1L, 2L, 3L), Vector256.Create((long)(i - start))).AsDouble();
+            Vector256<double> xi = Vector256.LoadUnsafe(ref xs, (nuint)start), yi = Vector256.LoadUnsafe(ref ys, (nuint)start);
+            (Vector256<double> wr, Vector256<double> wrdx) = WeightedResidual(xi, yi, weights.At(start, xi, yi) * scale, vc, vm, negC, negM, vb, va);
+            swr = Vector256.ConditionalSelect(take, swr + wr, swr);
+            swdxr = Vector256.ConditionalSelect(take, swdxr + wrdx, swdxr);
+        }
+
+        return (Sum(swr.GetLower(), swr.GetUpper()), Sum(swdxr.GetLower(), swdxr.GetUpper()));
+    }
+
+    /// <summary>w·r and w·r·dx lane by lane, the operations of <see cref="AddResidual"/> in its order.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static (Vector256<double> Wr, Vector256<double> WrDx) WeightedResidual(
+        Vector256<double> x, Vector256<double> y, Vector256<double> w, Vector256<double> c, Vector256<double> m, Vector256<double> negC, Vector256<double> negM, Vector256<double> b, Vector256<double> alpha)
+    {
+        Vector256<double> dx = x - c, dy = y - m, bdx = b * dx;
+        Vector256<double> productError = Fma.MultiplyAdd(b, dx, -bdx);
+        Vector256<double> byy = dy - y, sumErrorY = (y - (dy - byy)) + (negM - byy);
+        Vector256<double> bxx = dx - x, sumErrorX = (x - (dx - bxx)) + (negC - bxx);
+        Vector256<double> res = ((((dy - bdx) - productError) + sumErrorY) - (b * sumErrorX)) - alpha;
+        Vector256<double> wr = w * res;
+        return (wr, wr * dx);
+    }
+#endif
 
     private readonly struct Sums
     {

@@ -86,7 +86,8 @@ internal static class CrossBuildScenarios
 
     /// <summary>
     /// Straight lines through the span entry point for every length 3…20 (every tail of the four-lane sums) and
-    /// every weighting, on seeded data near 1 and offset by 1000 (refinement pass): the netstandard2.0 build sums
+    /// every weighting, on seeded data near 1, offset by 1000, and offset by 1000 with 1e-6 noise (refinement
+    /// pass): the netstandard2.0 build sums
     /// one double at a time, the net8.0 build with vectors where the hardware has them.
     /// </summary>
     internal static string LineFits()
@@ -96,18 +97,25 @@ internal static class CrossBuildScenarios
         for (int n = 3; n <= 20; n++)
         {
             var x = new double[n];
-            var y = new double[n];
+            var u = new double[n];
             var s = new double[n];
             for (int i = 0; i < n; i++)
             {
                 x[i] = 0.5 * (i + 1) * (1 + (0.01 * random.NextOpenUnit()));
-                y[i] = (0.002 + (0.0198 * x[i])) * (1 + (0.01 * (random.NextOpenUnit() - 0.5)));
+                u[i] = random.NextOpenUnit() - 0.5;
                 s[i] = 0.5 + random.NextOpenUnit();
             }
 
-            foreach (double offset in new[] { 0.0, 1000.0 })
+            foreach ((double offset, double noise) in new[] { (0.0, 0.01), (1000.0, 0.01), (1000.0, 1e-6) })
             {
-                double[] xs = Array.ConvertAll(x, v => v + offset);
+                var xs = new double[n];
+                var y = new double[n];
+                for (int i = 0; i < n; i++)
+                {
+                    xs[i] = x[i] + offset;
+                    y[i] = (0.002 + (0.0198 * xs[i])) * (1 + (noise * u[i]));
+                }
+
                 foreach (Weighting weighting in new[]
                 {
                     Weighting.None, Weighting.InverseX, Weighting.InverseXSquared, Weighting.InverseY, Weighting.InverseYSquared,
@@ -115,7 +123,7 @@ internal static class CrossBuildScenarios
                 })
                 {
                     LineFit line = RegressionFit.FitLine(xs, y, weighting);
-                    text.Append(n).Append(' ').Append(offset).Append(' ').Append(weighting.Name).Append(':');
+                    text.Append(n).Append(' ').Append(offset).Append(' ').Append(noise).Append(' ').Append(weighting.Name).Append(':');
                     foreach (double v in new[] { line.Intercept, line.Slope, line.WeightedMeanX, line.WeightedMeanY, line.WeightedSumOfSquaresX, line.MinX, line.MaxX, line.ResidualStandardDeviation(xs, y) })
                     {
                         Append(text, v);
