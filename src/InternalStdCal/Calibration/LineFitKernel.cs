@@ -227,6 +227,7 @@ internal static class LineFitKernel
 
 #if NET8_0_OR_GREATER
     /// <summary>The four lanes in one 256-bit vector per sum.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Sums Accumulate256<TWeight>(ReadOnlySpan<double> x, ReadOnlySpan<double> y, TWeight weights, double weightScale, double c, double m)
         where TWeight : struct, IPointWeight
     {
