@@ -773,8 +773,9 @@ internal static class LineFitKernel
 /// Which accumulation <see cref="LineFitKernel"/> uses. Every sum is formed in four lanes, point i of the full
 /// blocks of four going to lane i mod 4 and, when n is not a multiple of 4, the last r points to lanes 4 − r … 3
 /// (point n − 4 + k to lane k); the lanes are combined as (l0 + l2) + (l1 + l3), smallest and largest values by
-/// a &lt; b ? a : b and a &gt; b ? a : b in the same order, with no fused multiply-add. So the vector paths and the
-/// scalar path (the netstandard2.0 build) give the same bits.
+/// a &lt; b ? a : b and a &gt; b ? a : b in the same order, with no fused multiply-add in any sum (the refinement's
+/// TwoProduct error term is exact on every target, by FMA or Dekker's split). So the vector paths and the scalar
+/// path (the netstandard2.0 build) give the same bits.
 /// </summary>
 internal enum SumPath
 {
