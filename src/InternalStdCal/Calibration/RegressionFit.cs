@@ -363,7 +363,8 @@ public sealed class RegressionFit
             // Copies (the fit keeps them) and one checked pass of the shared kernel; anything unusual goes on below.
             var xc = (double[])xa.Clone();
             var yc = (double[])ya.Clone();
-            if (LineFitKernel.TryFit(xc, yc, weighting, 1.0, out LineFit fast))
+            LineFit fast = LineFitKernel.Fit(xc, yc, weighting, 1.0);
+            if (fast.Count != 0)
             {
                 return new RegressionFit(xc, yc, fast);
             }
@@ -435,9 +436,13 @@ public sealed class RegressionFit
 
         // Weights scaled exactly by the power of 2 that brings the largest into [1, 2): the sums cannot overflow.
         double scale = weighting.Scheme == WeightingScheme.None ? 1.0 : PowerOfTwoScale(maxRawWeight);
-        if (model == CalibrationModel.Linear && LineFitKernel.TryFit(xs, ys, weighting, scale, out LineFit line))
+        if (model == CalibrationModel.Linear)
         {
-            return new RegressionFit(xs, ys, line);
+            LineFit line = LineFitKernel.Fit(xs, ys, weighting, scale);
+            if (line.Count != 0)
+            {
+                return new RegressionFit(xs, ys, line);
+            }
         }
 
         return new RegressionFit(model, weighting, xs, ys, minX, maxX, scale);
@@ -470,10 +475,13 @@ public sealed class RegressionFit
     public static LineFit FitLine(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Weighting? weighting = null)
     {
         weighting ??= Weighting.None;
-        if (x.Length == y.Length && x.Length >= 3 && (!weighting.IsPerPoint || weighting.PointValues.Count == x.Length)
-            && LineFitKernel.TryFit(x, y, weighting, 1.0, out LineFit line))
+        if (x.Length == y.Length && x.Length >= 3 && (!weighting.IsPerPoint || weighting.Values.Length == x.Length))
         {
-            return line;
+            LineFit line = LineFitKernel.Fit(x, y, weighting, 1.0);
+            if (line.Count != 0)
+            {
+                return line;
+            }
         }
 
         return Fit(x.ToArray(), y.ToArray(), CalibrationModel.Linear, weighting).ToLineFit();

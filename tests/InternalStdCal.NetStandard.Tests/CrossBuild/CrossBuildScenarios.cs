@@ -84,6 +84,59 @@ internal static class CrossBuildScenarios
         return text.ToString();
     }
 
+    /// <summary>
+    /// Straight lines through the span entry point for every length 3…20 (every tail of the four-lane sums) and
+    /// every weighting, on seeded data near 1, offset by 1000, and offset by 1000 with 1e-6 noise (refinement
+    /// pass): the netstandard2.0 build sums
+    /// one double at a time, the net8.0 build with vectors where the hardware has them.
+    /// </summary>
+    internal static string LineFits()
+    {
+        var text = new StringBuilder();
+        var random = new Xoshiro256StarStar(20261203);
+        for (int n = 3; n <= 20; n++)
+        {
+            var x = new double[n];
+            var u = new double[n];
+            var s = new double[n];
+            for (int i = 0; i < n; i++)
+            {
+                x[i] = 0.5 * (i + 1) * (1 + (0.01 * random.NextOpenUnit()));
+                u[i] = random.NextOpenUnit() - 0.5;
+                s[i] = 0.5 + random.NextOpenUnit();
+            }
+
+            foreach ((double offset, double noise) in new[] { (0.0, 0.01), (1000.0, 0.01), (1000.0, 1e-6) })
+            {
+                var xs = new double[n];
+                var y = new double[n];
+                for (int i = 0; i < n; i++)
+                {
+                    xs[i] = x[i] + offset;
+                    y[i] = (0.002 + (0.0198 * xs[i])) * (1 + (noise * u[i]));
+                }
+
+                foreach (Weighting weighting in new[]
+                {
+                    Weighting.None, Weighting.InverseX, Weighting.InverseXSquared, Weighting.InverseY, Weighting.InverseYSquared,
+                    Weighting.InverseVariance(s), Weighting.Custom(s),
+                })
+                {
+                    LineFit line = RegressionFit.FitLine(xs, y, weighting);
+                    text.Append(n).Append(' ').Append(offset).Append(' ').Append(noise).Append(' ').Append(weighting.Name).Append(':');
+                    foreach (double v in new[] { line.Intercept, line.Slope, line.WeightedMeanX, line.WeightedMeanY, line.WeightedSumOfSquaresX, line.MinX, line.MaxX, line.ResidualStandardDeviation(xs, y) })
+                    {
+                        Append(text, v);
+                    }
+
+                    text.Append(line.IsRefined ? " refined\n" : "\n");
+                }
+            }
+        }
+
+        return text.ToString();
+    }
+
     /// <summary>GUM and Monte Carlo (fixed and adaptive) evaluations of one product model.</summary>
     internal static string Uncertainty()
     {

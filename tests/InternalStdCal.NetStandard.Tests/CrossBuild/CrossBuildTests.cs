@@ -29,6 +29,7 @@ public class CrossBuildTests
     [Theory]
     [InlineData(nameof(CrossBuildScenarios.DemoRun))]
     [InlineData(nameof(CrossBuildScenarios.Fits))]
+    [InlineData(nameof(CrossBuildScenarios.LineFits))]
     [InlineData(nameof(CrossBuildScenarios.Uncertainty))]
     [InlineData(nameof(CrossBuildScenarios.ProductErrors))]
     [InlineData(nameof(CrossBuildScenarios.UndefinedEnumMessage))]
