@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Linq;
 using System.Text;
+using System.Threading;
 using InternalStdCal.Internal;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -20,23 +21,20 @@ namespace InternalStdCal.Calibration;
 /// value per fit point in that order (see <see cref="ReplicateVarianceWeighting"/>).</para>
 /// <para>Weights are normalised to Σw = n by <see cref="RegressionFit"/>; weighted diagnostics use the normalised
 /// weights.</para>
+/// <para>The lack-of-fit, Mandel and variance-homogeneity tests (and their notes) are computed on first use,
+/// thread-safely: every caller sees the same instances, with the values computing them in <see cref="Fit"/> gave.</para>
 /// </remarks>
 public sealed class RegressionCalibration : RatioCalibration
 {
-    private RegressionCalibration(
-        StandardSet set,
-        RegressionFit regression,
-        IReadOnlyList<StandardResult> standards,
-        List<string> notes,
-        LackOfFitTest? lackOfFit,
-        MandelTest? mandel,
-        VarianceHomogeneityTest? homogeneity)
+    // The weighting Fit was given (what Mandel's extra fits use); the diagnostics once computed.
+    private readonly Weighting _weighting;
+    private DiagnosticTests? _diagnostics;
+
+    private RegressionCalibration(StandardSet set, RegressionFit regression, Weighting weighting, IReadOnlyList<StandardResult> standards, List<string> notes)
         : base(set, ToRatioModel(regression.Model), regression.ParameterCount, standards, notes)
     {
         Regression = regression;
-        LackOfFit = lackOfFit;
-        Mandel = mandel;
-        VarianceHomogeneity = homogeneity;
+        _weighting = weighting;
         string x = set.AxisSymbol;
         string perX = x == "1" ? "1" : "(" + x + ")⁻¹";
         string perX2 = x == "1" ? "1" : "(" + x + ")⁻²";
@@ -80,13 +78,18 @@ public sealed class RegressionCalibration : RatioCalibration
     public double CoefficientOfDetermination => Regression.RSquared;
 
     /// <summary>Lack-of-fit F test; null (with a note) without replicates or without lack-of-fit degrees of freedom.</summary>
-    public LackOfFitTest? LackOfFit { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public LackOfFitTest? LackOfFit => Diagnostics.LackOfFit;
 
     /// <summary>Mandel's test straight line vs quadratic, same points and weighting; null (with a note) when not computable.</summary>
-    public MandelTest? Mandel { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public MandelTest? Mandel => Diagnostics.Mandel;
 
     /// <summary>ISO 8466-1 variance-homogeneity check of the lowest and highest standard; null (with a note) without replicates there.</summary>
-    public VarianceHomogeneityTest? VarianceHomogeneity { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public VarianceHomogeneityTest? VarianceHomogeneity => Diagnostics.VarianceHomogeneity;
+
+    private DiagnosticTests Diagnostics => Volatile.Read(ref _diagnostics) ?? (Interlocked.CompareExchange(ref _diagnostics, Diagnose(), null) ?? _diagnostics!);
 
     /// <summary>Covariance of two coefficients (see <see cref="RegressionFit.Covariance"/>), in the order of <see cref="Coefficients"/>.</summary>
     /// <param name="i">First index, 0 ≤ i &lt; p.</param>
@@ -126,11 +129,7 @@ public sealed class RegressionCalibration : RatioCalibration
         var notes = new List<string>();
         ResponseFactorCalibration.AddExclusionNotes(set, notes);
         StandardResult[] results = Describe(set, fit, notes);
-        double alpha = set.Options.SignificanceLevel;
-        LackOfFitTest? lof = LackOfFitTest.Compute(Groups(set, fit), fit.ParameterCount, alpha, notes);
-        MandelTest? mandel = ComputeMandel(x, y, model, weighting, fit, alpha, notes);
-        VarianceHomogeneityTest? homogeneity = VarianceHomogeneityTest.Compute(set, alpha, notes);
-        return new RegressionCalibration(set, fit, results, notes, lof, mandel, homogeneity);
+        return new RegressionCalibration(set, fit, weighting, results, notes);
     }
 
     /// <summary>Inverse-variance weighting (1/s²) from the replicate injections of each standard, one value per fit
@@ -283,6 +282,8 @@ public sealed class RegressionCalibration : RatioCalibration
         }
     }
 
+    private protected override IReadOnlyList<string> DiagnosticNotes() => Diagnostics.Notes;
+
     private static RatioModel ToRatioModel(CalibrationModel model) => model switch
     {
         CalibrationModel.Linear => RatioModel.Linear,
@@ -400,6 +401,21 @@ public sealed class RegressionCalibration : RatioCalibration
         return groups;
     }
 
+    // The three tests in the order Fit used to make them (their notes in that order); the fit points as Fit formed them.
+    private DiagnosticTests Diagnose()
+    {
+        StandardSet set = Set;
+        RegressionFit fit = Regression;
+        double[] x = set.Points.Select(p => p.X).ToArray();
+        double[] y = set.Points.Select(p => p.Y).ToArray();
+        var notes = new List<string>();
+        double alpha = set.Options.SignificanceLevel;
+        LackOfFitTest? lof = LackOfFitTest.Compute(Groups(set, fit), fit.ParameterCount, alpha, notes);
+        MandelTest? mandel = ComputeMandel(x, y, fit.Model, _weighting, fit, alpha, notes);
+        VarianceHomogeneityTest? homogeneity = VarianceHomogeneityTest.Compute(set, alpha, notes);
+        return new DiagnosticTests(lof, mandel, homogeneity, notes);
+    }
+
     private static MandelTest? ComputeMandel(double[] x, double[] y, CalibrationModel model, Weighting weighting, RegressionFit fit, double alpha, List<string> notes)
     {
         try
@@ -449,5 +465,24 @@ public sealed class RegressionCalibration : RatioCalibration
         }
 
         return bySd ? 1 / (value * value) : value;
+    }
+
+    private sealed class DiagnosticTests
+    {
+        internal DiagnosticTests(LackOfFitTest? lackOfFit, MandelTest? mandel, VarianceHomogeneityTest? varianceHomogeneity, IReadOnlyList<string> notes)
+        {
+            LackOfFit = lackOfFit;
+            Mandel = mandel;
+            VarianceHomogeneity = varianceHomogeneity;
+            Notes = notes;
+        }
+
+        internal LackOfFitTest? LackOfFit { get; }
+
+        internal MandelTest? Mandel { get; }
+
+        internal VarianceHomogeneityTest? VarianceHomogeneity { get; }
+
+        internal IReadOnlyList<string> Notes { get; }
     }
 }
