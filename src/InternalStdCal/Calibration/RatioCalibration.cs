@@ -32,6 +32,8 @@ public abstract class RatioCalibration
         Model = model;
         ParameterCount = parameterCount;
         Standards = standards;
+        LowestX = RangeEnd(low: true);
+        HighestX = RangeEnd(low: false);
         (RelativeStandardErrorPercent, _rseNote) = ComputeRse();
         _fitNotes = notes;
     }
@@ -91,10 +93,10 @@ public abstract class RatioCalibration
     }
 
     /// <summary>Lowest fitted non-blank x (axis unit, see <see cref="AxisUnitSymbol"/>).</summary>
-    public double LowestX => RangeEnd(low: true);
+    public double LowestX { get; }
 
     /// <summary>Highest fitted non-blank x (axis unit).</summary>
-    public double HighestX => RangeEnd(low: false);
+    public double HighestX { get; }
 
     /// <summary>
     /// Relative standard error in %, US EPA SW-846 Method 8000D:

@@ -298,10 +298,12 @@ public sealed class RegressionCalibration : RatioCalibration
 
     private static StandardResult[] Describe(StandardSet set, RegressionFit fit, List<string> notes)
     {
-        var pointIndex = new Dictionary<(int, int), int>();
-        for (int k = 0; k < set.Points.Count; k++)
+        // Fit points of a standard are consecutive (its injections in order, or its level mean): the first one's index.
+        int[] firstPoint = new int[set.Standards.Count];
+        firstPoint.AsSpan().Fill(-1);
+        for (int k = set.Points.Count - 1; k >= 0; k--)
         {
-            pointIndex[(set.Points[k].Standard, set.Points[k].Injection)] = k;
+            firstPoint[set.Points[k].Standard] = k;
         }
 
         var results = new StandardResult[set.Standards.Count];
@@ -315,18 +317,18 @@ public sealed class RegressionCalibration : RatioCalibration
             for (int j = 0; j < injections.Length; j++)
             {
                 ratios[j] = s.Injections[j].Ratio;
-                Concentration? back = BackCalculate(set, fit, i, ratios[j], s.Label + " #" + Text.I(j + 1), notes);
+                Concentration? back = BackCalculate(set, fit, i, ratios[j], j, notes);
                 injections[j] = new InjectionResult(
                     s.Injections[j],
                     fitted,
-                    pointIndex.TryGetValue((i, j), out int k) ? fit.StandardizedResiduals[k] : null,
+                    PointOf(set, firstPoint[i], i, j) is int k ? fit.StandardizedResiduals[k] : null,
                     back,
                     back is Concentration b ? ResponseFactorCalibration.RelativeError(b.Value, set.Analyte[i]) : null,
                     s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]));
             }
 
             double mean = StandardSet.MeanRatio(s);
-            Concentration? levelBack = BackCalculate(set, fit, i, mean, s.Label + " (mean)", notes);
+            Concentration? levelBack = BackCalculate(set, fit, i, mean, -1, notes);
             results[i] = new StandardResult(
                 s,
                 set.Included[i],
@@ -334,7 +336,7 @@ public sealed class RegressionCalibration : RatioCalibration
                 mean,
                 ratios.Length > 1 ? SampleStatistics.StandardDeviation(ratios, mean) : null,
                 fitted,
-                pointIndex.TryGetValue((i, -1), out int kl) ? fit.StandardizedResiduals[kl] : null,
+                PointOf(set, firstPoint[i], i, -1) is int kl ? fit.StandardizedResiduals[kl] : null,
                 levelBack,
                 levelBack is Concentration lb ? ResponseFactorCalibration.RelativeError(lb.Value, set.Analyte[i]) : null,
                 s.IsBlank ? null : mean / (set.Analyte[i] / set.InternalStandard[i]),
@@ -344,7 +346,20 @@ public sealed class RegressionCalibration : RatioCalibration
         return results;
     }
 
-    private static Concentration? BackCalculate(StandardSet set, RegressionFit fit, int standard, double response, string id, List<string> notes)
+    // Index of the fit point of injection j of a standard (j = -1: its level mean), or null when it is not one.
+    private static int? PointOf(StandardSet set, int first, int standard, int injection)
+    {
+        if (first < 0)
+        {
+            return null;
+        }
+
+        int k = injection < 0 ? first : first + injection;
+        return k < set.Points.Count && set.Points[k].Standard == standard && set.Points[k].Injection == injection ? k : null;
+    }
+
+    // injection: the injection's index, or -1 for the standard's mean response.
+    private static Concentration? BackCalculate(StandardSet set, RegressionFit fit, int standard, double response, int injection, List<string> notes)
     {
         double x;
         try
@@ -353,7 +368,8 @@ public sealed class RegressionCalibration : RatioCalibration
         }
         catch (Exception e) when (e is ArgumentOutOfRangeException or InvalidOperationException)
         {
-            notes.Add("No back-calculated value for " + id + ": " + e.Message);
+            string label = set.Standards[standard].Label;
+            notes.Add("No back-calculated value for " + (injection < 0 ? label + " (mean)" : label + " #" + Text.I(injection + 1)) + ": " + e.Message);
             return null;
         }
 
