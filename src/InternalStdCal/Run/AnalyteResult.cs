@@ -33,7 +33,6 @@ public sealed class AnalyteResult
     private string[]? _noteEntries;
     private int _noteCount;
     private Flags _flags;
-    private ReportedStatus _reportedStatus;
     private double _meanRatio;
     private double _measured;
     private double _measuredLower;
@@ -42,10 +41,7 @@ public sealed class AnalyteResult
     private double _sampleLower;
     private double _sampleUpper;
     private ConcentrationUnit _sampleUnit;
-    private QuantitationResult? _quantitation;
-    private SampleResult? _sampleCalculation;
-    private ReportedValue? _reported;
-    private IReadOnlyList<string>? _notes;
+    private Deferred? _deferred;
 
     // Rows of one sample (all analytes share the array and the orders) for one analyte; filled in by RunProcessor
     // before the report is returned, read-only afterwards. The quantitation, back-calculation, reported value and
@@ -84,7 +80,7 @@ public sealed class AnalyteResult
     /// <summary>The quantitation in the measured solution (calibration unit); null when not quantified.</summary>
     /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
     public QuantitationResult? Quantitation =>
-        Volatile.Read(ref _quantitation) ?? (IsQuantified ? Interlocked.CompareExchange(ref _quantitation, Quantify(), null) ?? _quantitation! : null);
+        IsQuantified ? Volatile.Read(ref Parts.Quantitation) ?? Interlocked.CompareExchange(ref Parts.Quantitation, Quantify(), null) ?? Parts.Quantitation! : null;
 
     /// <summary>Concentration in the measured solution (calibration unit); null when not quantified.</summary>
     public Concentration? InMeasuredSolution => IsQuantified ? InMeasuredUnit(_measured) : null;
@@ -99,10 +95,11 @@ public sealed class AnalyteResult
     /// budget; null when not quantified or when the preparation does not fit the result's kind (see <see cref="Notes"/>).</summary>
     /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
     public SampleResult? SampleCalculation =>
-        Volatile.Read(ref _sampleCalculation)
-        ?? ((_flags & Flags.InSample) != 0 && Quantitation is QuantitationResult q
-            ? Interlocked.CompareExchange(ref _sampleCalculation, Rows[0].Preparation.ToSample(q.AsMeasured() ?? Measured.Exact(q.Concentration)), null) ?? _sampleCalculation!
-            : null);
+        (_flags & Flags.InSample) != 0 && Quantitation is QuantitationResult q
+            ? Volatile.Read(ref Parts.SampleCalculation)
+                ?? Interlocked.CompareExchange(ref Parts.SampleCalculation, Rows[0].Preparation.ToSample(q.AsMeasured() ?? Measured.Exact(q.Concentration)), null)
+                ?? Parts.SampleCalculation!
+            : null;
 
     /// <summary>Concentration in the original sample with its standard uncertainty (calibration standard error
     /// and preparation terms combined, see <see cref="SampleResult"/>); null as <see cref="SampleCalculation"/>.</summary>
@@ -126,15 +123,14 @@ public sealed class AnalyteResult
     /// judged after its dilution factor is applied, not in the measured solution.</remarks>
     /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
     public ReportedValue? Reported =>
-        Volatile.Read(ref _reported)
-        ?? ((_flags & Flags.Reported) != 0 ? Interlocked.CompareExchange(ref _reported, Report(), null) ?? _reported! : null);
+        (_flags & Flags.Reported) != 0 ? Volatile.Read(ref Parts.Reported) ?? Interlocked.CompareExchange(ref Parts.Reported, Report(), null) ?? Parts.Reported! : null;
 
     /// <summary>The qualifier flags of the result.</summary>
     public ResultQualifiers Qualifiers { get; internal set; }
 
     /// <summary>The trail: what was used, what was set aside and why, what each qualifier refers to.</summary>
     /// <remarks>Formatted on first use (thread-safe; every caller sees the same instance).</remarks>
-    public IReadOnlyList<string> Notes => Volatile.Read(ref _notes) ?? (Interlocked.CompareExchange(ref _notes, FormatNotes(), null) ?? _notes!);
+    public IReadOnlyList<string> Notes => Volatile.Read(ref Parts.Notes) ?? Interlocked.CompareExchange(ref Parts.Notes, FormatNotes(), null) ?? Parts.Notes!;
 
     /// <summary>The sample's rows (all of them, used or set aside), in injection order.</summary>
     internal RunInjection[] Rows { get; }
@@ -274,12 +270,12 @@ public sealed class AnalyteResult
         }
     }
 
-    /// <summary>Records how the value in the original sample is reported (the value itself is made on first read).</summary>
-    internal void ReportedAs(ReportedStatus status)
-    {
-        _reportedStatus = status;
-        _flags |= Flags.Reported;
-    }
+    /// <summary>Records that the value in the original sample is reported against the analyte's limits (or as
+    /// quantified without limits); the <see cref="ReportedValue"/> is made on first read.</summary>
+    internal void MarkReported() => _flags |= Flags.Reported;
+
+    // The parts built on first read, in one object made on the first such read.
+    private Deferred Parts => Volatile.Read(ref _deferred) ?? Interlocked.CompareExchange(ref _deferred, new Deferred(), null) ?? _deferred!;
 
     private Concentration InMeasuredUnit(double value) => Concentration.From(value, _context.Calibration.Calibration!.Unit);
 
@@ -332,4 +328,13 @@ public sealed class AnalyteResult
         + InMeasuredUnit(_measured).ToString("G6", null) + " in the measured solution.";
 
     private string OriginalSampleNote() => "Original sample: " + Rows[0].Preparation + " → " + SampleValue!.Value.ToString("G6", null) + ".";
+
+    // Fields so that each part can be published with Interlocked.CompareExchange.
+    private sealed class Deferred
+    {
+        internal QuantitationResult? Quantitation;
+        internal SampleResult? SampleCalculation;
+        internal ReportedValue? Reported;
+        internal IReadOnlyList<string>? Notes;
+    }
 }

@@ -214,6 +214,9 @@ public static class RunProcessor
 
     private sealed class State
     {
+        // The notes of a check without notes (one read-only instance for all).
+        private static readonly IReadOnlyList<string> NoNotes = Array.AsReadOnly(Array.Empty<string>());
+
         private readonly AnalyticalRun _run;
         private readonly RunMethod _method;
         private readonly Dictionary<int, RowState> _rows = new();
@@ -223,6 +226,9 @@ public static class RunProcessor
         private readonly List<RowState[]> _sampleStates;
         private readonly List<RunInjection[]> _calibrationLevels;
         private readonly double[] _ratios;
+
+        // Each quality-control row (as a one-row sample) with its state, in injection order.
+        private readonly List<(RunInjection[] Row, RowState[] State)> _qualityControls;
         private readonly Dictionary<string, int> _samplePosition = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _analyteIndex = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _isIndex = new(StringComparer.Ordinal);
@@ -263,6 +269,7 @@ public static class RunProcessor
             // Calibration rows by id (a level and its replicate injections), in order of first injection (as GroupBy).
             _calibrationLevels = run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank)
                 .GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
+            _qualityControls = run.Injections.Where(r => r.Role == InjectionRole.QualityControl).Select(r => (new[] { r }, new[] { _rows[r.Order] })).ToList();
             _ratios = new double[Math.Max(1, _samples.Count == 0 ? 1 : _samples.Max(g => g.Length))];
         }
 
@@ -499,16 +506,17 @@ public static class RunProcessor
             int ai = c.Index;
             var checks = new List<QualityControlCheck>();
             RecoveryWindow? window = _method.QualityControlRecovery;
-            foreach (RunInjection r in _run.Injections.Where(r => r.Role == InjectionRole.QualityControl))
+            foreach ((RunInjection[] qcRow, RowState[] qcState) in _qualityControls)
             {
+                RunInjection r = qcRow[0];
                 if (!r.Nominal.TryGetValue(a.Analyte, out Concentration nominal))
                 {
                     _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
                     continue;
                 }
 
-                var b = new AnalyteResult(c, new[] { r }, Array.Empty<int>());
-                QuantitationEstimate? estimate = Quantify(c, b, new[] { _rows[r.Order] }, InjectionStatus.QualityControlEvaluated);
+                var b = new AnalyteResult(c, qcRow, Array.Empty<int>());
+                QuantitationEstimate? estimate = Quantify(c, b, qcState, InjectionStatus.QualityControlEvaluated);
                 double? recovery = null;
                 if (estimate is QuantitationEstimate q)
                 {
@@ -554,7 +562,7 @@ public static class RunProcessor
 
         private static DuplicateCheck Duplicate(string analyte, AnalyteResult parent, AnalyteResult dup, RpdLimit? limit)
         {
-            var notes = new List<string>(0);
+            List<string>? notes = null;
             Concentration? a = parent.SampleValue;
             Concentration? b = dup.SampleValue;
             double? rpd = null;
@@ -562,7 +570,7 @@ public static class RunProcessor
             {
                 if (x.Kind != y.Kind)
                 {
-                    notes.Add("Sample and duplicate results are of different kinds; no RPD.");
+                    (notes = new List<string>()).Add("Sample and duplicate results are of different kinds; no RPD.");
                     b = null;
                 }
                 else
@@ -576,13 +584,13 @@ public static class RunProcessor
                     }
                     else
                     {
-                        notes.Add("Mean of sample and duplicate is ≤ 0; no RPD.");
+                        (notes = new List<string>()).Add("Mean of sample and duplicate is ≤ 0; no RPD.");
                     }
                 }
             }
             else
             {
-                notes.Add("Sample or duplicate has no result in the original sample; no RPD.");
+                (notes = new List<string>()).Add("Sample or duplicate has no result in the original sample; no RPD.");
             }
 
             bool? passed = limit is null ? null : rpd is double r && r <= limit.MaxPercent;
@@ -595,12 +603,12 @@ public static class RunProcessor
                 parent.AddNote(text + " (duplicate '" + dup.SampleId + "')");
             }
 
-            return new DuplicateCheck(analyte, parent.SampleId, dup.SampleId, a, b, rpd, limit, passed, notes);
+            return new DuplicateCheck(analyte, parent.SampleId, dup.SampleId, a, b, rpd, limit, passed, notes ?? NoNotes);
         }
 
         private static SpikeCheck Spike(string analyte, AnalyteResult parent, AnalyteResult spiked, Concentration added, RecoveryWindow? window)
         {
-            var notes = new List<string>(0);
+            List<string>? notes = null;
             Concentration? s = spiked.SampleValue;
             Concentration? u = parent.SampleValue;
             double? recovery = null;
@@ -608,7 +616,7 @@ public static class RunProcessor
             {
                 if (x.Kind != y.Kind || x.Kind != added.Kind)
                 {
-                    notes.Add("Spiked, unspiked and added amounts are not all of one kind; no recovery.");
+                    (notes = new List<string>()).Add("Spiked, unspiked and added amounts are not all of one kind; no recovery.");
                     u = null;
                 }
                 else
@@ -620,7 +628,7 @@ public static class RunProcessor
             }
             else
             {
-                notes.Add("Spiked or unspiked sample has no result in the original sample; no recovery.");
+                (notes = new List<string>()).Add("Spiked or unspiked sample has no result in the original sample; no recovery.");
             }
 
             bool? passed = window is null ? null : recovery is double r && window.Contains(r);
@@ -630,7 +638,7 @@ public static class RunProcessor
                 spiked.AddNote("Spike recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + ".");
             }
 
-            return new SpikeCheck(analyte, spiked.SampleId, parent.SampleId, s, u, added, recovery, window, passed, notes);
+            return new SpikeCheck(analyte, spiked.SampleId, parent.SampleId, s, u, added, recovery, window, passed, notes ?? NoNotes);
         }
 
 
@@ -721,7 +729,7 @@ public static class RunProcessor
 
             if (a.Limits is not ReportingLimits limits)
             {
-                b.ReportedAs(ReportedStatus.Quantified);
+                b.MarkReported();
                 return;
             }
 
@@ -733,7 +741,7 @@ public static class RunProcessor
             }
 
             ReportedStatus status = limits.Classify(c);
-            b.ReportedAs(status);
+            b.MarkReported();
             if (status == ReportedStatus.NotDetected)
             {
                 b.Qualifiers |= ResultQualifiers.BelowLimitOfDetection;
