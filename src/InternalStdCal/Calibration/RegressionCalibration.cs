@@ -47,13 +47,16 @@ public sealed class RegressionCalibration : RatioCalibration
         };
         for (int i = 0; i < symbols.Length; i++)
         {
-            (string meaning, string unit) = symbols[i] switch
+            (string meaning, string unit, double value) = symbols[i] switch
             {
-                "a" => ("intercept", "1"),
-                "b" => ("slope", perX),
-                _ => ("curvature", perX2),
+                "a" => ("intercept", "1", regression.Intercept),
+                "b" => ("slope", perX, regression.Slope),
+                _ => ("curvature", perX2, regression.Curvature),
             };
-            list.Add(new CoefficientEstimate(symbols[i], meaning, regression.Coefficients[i], regression.StandardErrors[i], regression.CoefficientInterval(i, set.Options.ConfidenceLevel), unit));
+
+            // regression.Coefficients[i] and StandardErrors[i] by their definitions, without the fit's residual views
+            // (made on first use of residuals).
+            list.Add(new CoefficientEstimate(symbols[i], meaning, value, Math.Sqrt(regression.Covariance(i, i)), regression.CoefficientInterval(i, set.Options.ConfidenceLevel), unit));
         }
 
         Coefficients = list;
@@ -318,16 +321,20 @@ public sealed class RegressionCalibration : RatioCalibration
             {
                 ratios[j] = s.Injections[j].Ratio;
                 Concentration? back = BackCalculate(set, fit, i, ratios[j], j, notes);
+                int? k = PointOf(set, firstPoint[i], i, j);
                 injections[j] = new InjectionResult(
                     s.Injections[j],
                     fitted,
-                    PointOf(set, firstPoint[i], i, j) is int k ? fit.StandardizedResiduals[k] : null,
+                    null,
                     back,
                     back is Concentration b ? ResponseFactorCalibration.RelativeError(b.Value, set.Analyte[i]) : null,
-                    s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]));
+                    s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]),
+                    k is null ? null : fit,
+                    k ?? -1);
             }
 
             double mean = StandardSet.MeanRatio(s);
+            int? level = PointOf(set, firstPoint[i], i, -1);
             Concentration? levelBack = BackCalculate(set, fit, i, mean, -1, notes);
             results[i] = new StandardResult(
                 s,
@@ -336,11 +343,13 @@ public sealed class RegressionCalibration : RatioCalibration
                 mean,
                 ratios.Length > 1 ? SampleStatistics.StandardDeviation(ratios, mean) : null,
                 fitted,
-                PointOf(set, firstPoint[i], i, -1) is int kl ? fit.StandardizedResiduals[kl] : null,
+                null,
                 levelBack,
                 levelBack is Concentration lb ? ResponseFactorCalibration.RelativeError(lb.Value, set.Analyte[i]) : null,
                 s.IsBlank ? null : mean / (set.Analyte[i] / set.InternalStandard[i]),
-                injections);
+                injections,
+                level is null ? null : fit,
+                level ?? -1);
         }
 
         return results;
