@@ -110,12 +110,15 @@ public class RunProcessorThreadSafetyTests
     [InlineData(CalibrationModel.Quadratic, 0.004)]
     public void RegressionCalibration_DiagnosticsFirstUsedFromManyThreads_SameInstancesEqualToSerialValues(CalibrationModel model, double curvature)
     {
-        // Lack of fit, Mandel's test and variance homogeneity are computed on first use. Invented replicated standards
+        // Lack of fit, Mandel's test, variance homogeneity and the standards' standardised residuals (read from the
+        // fit's lazily made residual views) are computed on first use. Invented replicated standards
         // (3 injections at 5 levels, so all three tests are computed); the check is equality with a serial first use,
         // whichever of the tests or the notes a thread reads first.
         List<CalibrationStandard> standards = RegressionCalibrationTests.Replicated(curvature);
         RegressionCalibration reference = RegressionCalibration.Fit(standards, model, Weighting.InverseX);
         string expected = Describe(reference.LackOfFit, reference.Mandel, reference.VarianceHomogeneity, reference.Notes);
+        double?[] expectedResiduals = StandardizedResiduals(reference);
+        Assert.Contains(expectedResiduals, z => z is not null);
         Assert.NotNull(reference.LackOfFit);
         Assert.NotNull(reference.Mandel);
         Assert.NotNull(reference.VarianceHomogeneity);
@@ -123,17 +126,20 @@ public class RunProcessorThreadSafetyTests
         for (int attempt = 0; attempt < 20; attempt++)
         {
             RegressionCalibration shared = RegressionCalibration.Fit(standards, model, Weighting.InverseX);
-            var seen = new (object? Lof, object? Mandel, object? Homogeneity, object Notes)[8];
+            var seen = new (object? Lof, object? Mandel, object? Homogeneity, object Notes)[10];
+            var residuals = new double?[10][];
             Parallel.For(0, seen.Length, i =>
             {
                 // Each thread starts with a different member, so any of them may trigger the computation.
-                object first = (i % 4) switch
+                object first = (i % 5) switch
                 {
                     0 => (object?)shared.LackOfFit ?? string.Empty,
                     1 => (object?)shared.Mandel ?? string.Empty,
                     2 => (object?)shared.VarianceHomogeneity ?? string.Empty,
+                    3 => StandardizedResiduals(shared),
                     _ => shared.Notes,
                 };
+                residuals[i] = StandardizedResiduals(shared);
                 seen[i] = (shared.LackOfFit, shared.Mandel, shared.VarianceHomogeneity, shared.Notes);
                 Assert.NotNull(first);
             });
@@ -142,6 +148,7 @@ public class RunProcessorThreadSafetyTests
             Assert.All(seen, x => Assert.Same(seen[0].Homogeneity, x.Homogeneity));
             Assert.All(seen, x => Assert.Same(seen[0].Notes, x.Notes));
             Assert.Equal(expected, Describe(shared.LackOfFit, shared.Mandel, shared.VarianceHomogeneity, shared.Notes));
+            Assert.All(residuals, r => Assert.Equal(expectedResiduals, r));
             Assert.Equal(reference.Summary(), shared.Summary());
         }
     }
@@ -206,6 +213,10 @@ public class RunProcessorThreadSafetyTests
             Assert.Equal(serial.SymmetricInterval.Upper, p.SymmetricInterval.Upper);
         });
     }
+
+    // Standardised residuals of every level and injection, in order.
+    private static double?[] StandardizedResiduals(RegressionCalibration calibration) =>
+        calibration.Standards.SelectMany(s => s.Injections.Select(i => i.StandardizedResidual).Prepend(s.StandardizedResidual)).ToArray();
 
     // Every number of the three tests in round-trip form, and the notes: equal text means bit-identical values.
     private static string Describe(LackOfFitTest? lof, MandelTest? mandel, VarianceHomogeneityTest? homogeneity, IReadOnlyList<string> notes)
