@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Text;
+using System.Threading;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
 
@@ -20,14 +21,21 @@ namespace InternalStdCal.Calibration;
 /// </remarks>
 public abstract class RatioCalibration
 {
+    // Notes made while fitting (exclusions, back-calculation), then those of the derived type's diagnostics, then the RSE note.
+    private readonly List<string> _fitNotes;
+    private readonly string? _rseNote;
+    private IReadOnlyList<string>? _notes;
+
     private protected RatioCalibration(StandardSet set, RatioModel model, int parameterCount, IReadOnlyList<StandardResult> standards, List<string> notes)
     {
         Set = set;
         Model = model;
         ParameterCount = parameterCount;
         Standards = standards;
-        RelativeStandardErrorPercent = ComputeRse(notes);
-        Notes = notes;
+        LowestX = RangeEnd(low: true);
+        HighestX = RangeEnd(low: false);
+        (RelativeStandardErrorPercent, _rseNote) = ComputeRse();
+        _fitNotes = notes;
     }
 
     /// <summary>The calibration function.</summary>
@@ -85,10 +93,10 @@ public abstract class RatioCalibration
     }
 
     /// <summary>Lowest fitted non-blank x (axis unit, see <see cref="AxisUnitSymbol"/>).</summary>
-    public double LowestX => RangeEnd(low: true);
+    public double LowestX { get; }
 
     /// <summary>Highest fitted non-blank x (axis unit).</summary>
-    public double HighestX => RangeEnd(low: false);
+    public double HighestX { get; }
 
     /// <summary>
     /// Relative standard error in %, US EPA SW-846 Method 8000D:
@@ -100,7 +108,8 @@ public abstract class RatioCalibration
 
     /// <summary>Everything the calibration did that a reviewer should know about: excluded points, statistics
     /// that could not be computed and why, options that had no effect.</summary>
-    public IReadOnlyList<string> Notes { get; }
+    /// <remarks>Put together on first use, with the diagnostics it reports on (thread-safe; every caller sees the same instance).</remarks>
+    public IReadOnlyList<string> Notes => Volatile.Read(ref _notes) ?? (Interlocked.CompareExchange(ref _notes, JoinNotes(), null) ?? _notes!);
 
     internal StandardSet Set { get; }
 
@@ -156,6 +165,9 @@ public abstract class RatioCalibration
     /// <summary>Model-specific report lines.</summary>
     private protected abstract void AppendModel(StringBuilder sb);
 
+    /// <summary>Notes of the model-specific diagnostics, which come after the fit's notes and before the RSE note.</summary>
+    private protected virtual IReadOnlyList<string> DiagnosticNotes() => Array.Empty<string>();
+
     /// <summary>The points counted by RSE and by acceptance rules: the fitted non-blank points, each with its
     /// level and its relative error (null when not back-calculable).</summary>
     internal IEnumerable<CalibratorPoint> Calibrators()
@@ -183,7 +195,22 @@ public abstract class RatioCalibration
 
     internal Concentration Conc(double value) => Concentration.From(value, Unit);
 
-    private double? ComputeRse(List<string> notes)
+    private List<string> JoinNotes()
+    {
+        IReadOnlyList<string> diagnostics = DiagnosticNotes();
+        var notes = new List<string>(_fitNotes.Count + diagnostics.Count + 1);
+        notes.AddRange(_fitNotes);
+        notes.AddRange(diagnostics);
+        if (_rseNote is not null)
+        {
+            notes.Add(_rseNote);
+        }
+
+        return notes;
+    }
+
+    // RSE, or null with the note saying why.
+    private (double? Rse, string? Note) ComputeRse()
     {
         double sum = 0;
         int n = 0;
@@ -191,8 +218,7 @@ public abstract class RatioCalibration
         {
             if (c.RelativeErrorPercent is not double re)
             {
-                notes.Add("RSE not computed: point '" + c.Id + "' has no back-calculated concentration.");
-                return null;
+                return (null, "RSE not computed: point '" + c.Id + "' has no back-calculated concentration.");
             }
 
             double e = re / 100;
@@ -202,11 +228,10 @@ public abstract class RatioCalibration
 
         if (n - ParameterCount < 1)
         {
-            notes.Add("RSE not computed: " + Text.I(n) + " non-blank points and p = " + Text.I(ParameterCount) + " leave no degrees of freedom (n − p < 1).");
-            return null;
+            return (null, "RSE not computed: " + Text.I(n) + " non-blank points and p = " + Text.I(ParameterCount) + " leave no degrees of freedom (n − p < 1).");
         }
 
-        return 100 * Math.Sqrt(sum / (n - ParameterCount));
+        return (100 * Math.Sqrt(sum / (n - ParameterCount)), null);
     }
 
     private double RangeEnd(bool low)

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Linq;
 using System.Text;
+using System.Threading;
 using InternalStdCal.Internal;
 using InternalStdCal.Quantitation;
 using InternalStdCal.Quantities;
@@ -20,23 +21,20 @@ namespace InternalStdCal.Calibration;
 /// value per fit point in that order (see <see cref="ReplicateVarianceWeighting"/>).</para>
 /// <para>Weights are normalised to Σw = n by <see cref="RegressionFit"/>; weighted diagnostics use the normalised
 /// weights.</para>
+/// <para>The lack-of-fit, Mandel and variance-homogeneity tests (and their notes) are computed on first use,
+/// thread-safely: every caller sees the same instances, with the values computing them in <see cref="Fit"/> gave.</para>
 /// </remarks>
 public sealed class RegressionCalibration : RatioCalibration
 {
-    private RegressionCalibration(
-        StandardSet set,
-        RegressionFit regression,
-        IReadOnlyList<StandardResult> standards,
-        List<string> notes,
-        LackOfFitTest? lackOfFit,
-        MandelTest? mandel,
-        VarianceHomogeneityTest? homogeneity)
+    // The weighting Fit was given (what Mandel's extra fits use); the diagnostics once computed.
+    private readonly Weighting _weighting;
+    private DiagnosticTests? _diagnostics;
+
+    private RegressionCalibration(StandardSet set, RegressionFit regression, Weighting weighting, IReadOnlyList<StandardResult> standards, List<string> notes)
         : base(set, ToRatioModel(regression.Model), regression.ParameterCount, standards, notes)
     {
         Regression = regression;
-        LackOfFit = lackOfFit;
-        Mandel = mandel;
-        VarianceHomogeneity = homogeneity;
+        _weighting = weighting;
         string x = set.AxisSymbol;
         string perX = x == "1" ? "1" : "(" + x + ")⁻¹";
         string perX2 = x == "1" ? "1" : "(" + x + ")⁻²";
@@ -49,13 +47,16 @@ public sealed class RegressionCalibration : RatioCalibration
         };
         for (int i = 0; i < symbols.Length; i++)
         {
-            (string meaning, string unit) = symbols[i] switch
+            (string meaning, string unit, double value) = symbols[i] switch
             {
-                "a" => ("intercept", "1"),
-                "b" => ("slope", perX),
-                _ => ("curvature", perX2),
+                "a" => ("intercept", "1", regression.Intercept),
+                "b" => ("slope", perX, regression.Slope),
+                _ => ("curvature", perX2, regression.Curvature),
             };
-            list.Add(new CoefficientEstimate(symbols[i], meaning, regression.Coefficients[i], regression.StandardErrors[i], regression.CoefficientInterval(i, set.Options.ConfidenceLevel), unit));
+
+            // regression.Coefficients[i] and StandardErrors[i] by their definitions, without the fit's residual views
+            // (made on first use of residuals).
+            list.Add(new CoefficientEstimate(symbols[i], meaning, value, Math.Sqrt(regression.Covariance(i, i)), regression.CoefficientInterval(i, set.Options.ConfidenceLevel), unit));
         }
 
         Coefficients = list;
@@ -80,13 +81,18 @@ public sealed class RegressionCalibration : RatioCalibration
     public double CoefficientOfDetermination => Regression.RSquared;
 
     /// <summary>Lack-of-fit F test; null (with a note) without replicates or without lack-of-fit degrees of freedom.</summary>
-    public LackOfFitTest? LackOfFit { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public LackOfFitTest? LackOfFit => Diagnostics.LackOfFit;
 
     /// <summary>Mandel's test straight line vs quadratic, same points and weighting; null (with a note) when not computable.</summary>
-    public MandelTest? Mandel { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public MandelTest? Mandel => Diagnostics.Mandel;
 
     /// <summary>ISO 8466-1 variance-homogeneity check of the lowest and highest standard; null (with a note) without replicates there.</summary>
-    public VarianceHomogeneityTest? VarianceHomogeneity { get; }
+    /// <remarks>Computed on first use (thread-safe; every caller sees the same instance).</remarks>
+    public VarianceHomogeneityTest? VarianceHomogeneity => Diagnostics.VarianceHomogeneity;
+
+    private DiagnosticTests Diagnostics => Volatile.Read(ref _diagnostics) ?? (Interlocked.CompareExchange(ref _diagnostics, Diagnose(), null) ?? _diagnostics!);
 
     /// <summary>Covariance of two coefficients (see <see cref="RegressionFit.Covariance"/>), in the order of <see cref="Coefficients"/>.</summary>
     /// <param name="i">First index, 0 ≤ i &lt; p.</param>
@@ -126,11 +132,7 @@ public sealed class RegressionCalibration : RatioCalibration
         var notes = new List<string>();
         ResponseFactorCalibration.AddExclusionNotes(set, notes);
         StandardResult[] results = Describe(set, fit, notes);
-        double alpha = set.Options.SignificanceLevel;
-        LackOfFitTest? lof = LackOfFitTest.Compute(Groups(set, fit), fit.ParameterCount, alpha, notes);
-        MandelTest? mandel = ComputeMandel(x, y, model, weighting, fit, alpha, notes);
-        VarianceHomogeneityTest? homogeneity = VarianceHomogeneityTest.Compute(set, alpha, notes);
-        return new RegressionCalibration(set, fit, results, notes, lof, mandel, homogeneity);
+        return new RegressionCalibration(set, fit, weighting, results, notes);
     }
 
     /// <summary>Inverse-variance weighting (1/s²) from the replicate injections of each standard, one value per fit
@@ -283,6 +285,8 @@ public sealed class RegressionCalibration : RatioCalibration
         }
     }
 
+    private protected override IReadOnlyList<string> DiagnosticNotes() => Diagnostics.Notes;
+
     private static RatioModel ToRatioModel(CalibrationModel model) => model switch
     {
         CalibrationModel.Linear => RatioModel.Linear,
@@ -297,10 +301,12 @@ public sealed class RegressionCalibration : RatioCalibration
 
     private static StandardResult[] Describe(StandardSet set, RegressionFit fit, List<string> notes)
     {
-        var pointIndex = new Dictionary<(int, int), int>();
-        for (int k = 0; k < set.Points.Count; k++)
+        // Fit points of a standard are consecutive (its injections in order, or its level mean): the first one's index.
+        int[] firstPoint = new int[set.Standards.Count];
+        firstPoint.AsSpan().Fill(-1);
+        for (int k = set.Points.Count - 1; k >= 0; k--)
         {
-            pointIndex[(set.Points[k].Standard, set.Points[k].Injection)] = k;
+            firstPoint[set.Points[k].Standard] = k;
         }
 
         var results = new StandardResult[set.Standards.Count];
@@ -314,18 +320,22 @@ public sealed class RegressionCalibration : RatioCalibration
             for (int j = 0; j < injections.Length; j++)
             {
                 ratios[j] = s.Injections[j].Ratio;
-                Concentration? back = BackCalculate(set, fit, i, ratios[j], s.Label + " #" + Text.I(j + 1), notes);
+                Concentration? back = BackCalculate(set, fit, i, ratios[j], j, notes);
+                int? k = PointOf(set, firstPoint[i], i, j);
                 injections[j] = new InjectionResult(
                     s.Injections[j],
                     fitted,
-                    pointIndex.TryGetValue((i, j), out int k) ? fit.StandardizedResiduals[k] : null,
+                    null,
                     back,
                     back is Concentration b ? ResponseFactorCalibration.RelativeError(b.Value, set.Analyte[i]) : null,
-                    s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]));
+                    s.IsBlank ? null : ratios[j] / (set.Analyte[i] / set.InternalStandard[i]),
+                    k is null ? null : fit,
+                    k ?? -1);
             }
 
             double mean = StandardSet.MeanRatio(s);
-            Concentration? levelBack = BackCalculate(set, fit, i, mean, s.Label + " (mean)", notes);
+            int? level = PointOf(set, firstPoint[i], i, -1);
+            Concentration? levelBack = BackCalculate(set, fit, i, mean, -1, notes);
             results[i] = new StandardResult(
                 s,
                 set.Included[i],
@@ -333,17 +343,32 @@ public sealed class RegressionCalibration : RatioCalibration
                 mean,
                 ratios.Length > 1 ? SampleStatistics.StandardDeviation(ratios, mean) : null,
                 fitted,
-                pointIndex.TryGetValue((i, -1), out int kl) ? fit.StandardizedResiduals[kl] : null,
+                null,
                 levelBack,
                 levelBack is Concentration lb ? ResponseFactorCalibration.RelativeError(lb.Value, set.Analyte[i]) : null,
                 s.IsBlank ? null : mean / (set.Analyte[i] / set.InternalStandard[i]),
-                injections);
+                injections,
+                level is null ? null : fit,
+                level ?? -1);
         }
 
         return results;
     }
 
-    private static Concentration? BackCalculate(StandardSet set, RegressionFit fit, int standard, double response, string id, List<string> notes)
+    // Index of the fit point of injection j of a standard (j = -1: its level mean), or null when it is not one.
+    private static int? PointOf(StandardSet set, int first, int standard, int injection)
+    {
+        if (first < 0)
+        {
+            return null;
+        }
+
+        int k = injection < 0 ? first : first + injection;
+        return k < set.Points.Count && set.Points[k].Standard == standard && set.Points[k].Injection == injection ? k : null;
+    }
+
+    // injection: the injection's index, or -1 for the standard's mean response.
+    private static Concentration? BackCalculate(StandardSet set, RegressionFit fit, int standard, double response, int injection, List<string> notes)
     {
         double x;
         try
@@ -352,7 +377,8 @@ public sealed class RegressionCalibration : RatioCalibration
         }
         catch (Exception e) when (e is ArgumentOutOfRangeException or InvalidOperationException)
         {
-            notes.Add("No back-calculated value for " + id + ": " + e.Message);
+            string label = set.Standards[standard].Label;
+            notes.Add("No back-calculated value for " + (injection < 0 ? label + " (mean)" : label + " #" + Text.I(injection + 1)) + ": " + e.Message);
             return null;
         }
 
@@ -398,6 +424,21 @@ public sealed class RegressionCalibration : RatioCalibration
         }
 
         return groups;
+    }
+
+    // The three tests in the order Fit used to make them (their notes in that order); the fit points as Fit formed them.
+    private DiagnosticTests Diagnose()
+    {
+        StandardSet set = Set;
+        RegressionFit fit = Regression;
+        double[] x = set.Points.Select(p => p.X).ToArray();
+        double[] y = set.Points.Select(p => p.Y).ToArray();
+        var notes = new List<string>();
+        double alpha = set.Options.SignificanceLevel;
+        LackOfFitTest? lof = LackOfFitTest.Compute(Groups(set, fit), fit.ParameterCount, alpha, notes);
+        MandelTest? mandel = ComputeMandel(x, y, fit.Model, _weighting, fit, alpha, notes);
+        VarianceHomogeneityTest? homogeneity = VarianceHomogeneityTest.Compute(set, alpha, notes);
+        return new DiagnosticTests(lof, mandel, homogeneity, notes);
     }
 
     private static MandelTest? ComputeMandel(double[] x, double[] y, CalibrationModel model, Weighting weighting, RegressionFit fit, double alpha, List<string> notes)
@@ -449,5 +490,24 @@ public sealed class RegressionCalibration : RatioCalibration
         }
 
         return bySd ? 1 / (value * value) : value;
+    }
+
+    private sealed class DiagnosticTests
+    {
+        internal DiagnosticTests(LackOfFitTest? lackOfFit, MandelTest? mandel, VarianceHomogeneityTest? varianceHomogeneity, IReadOnlyList<string> notes)
+        {
+            LackOfFit = lackOfFit;
+            Mandel = mandel;
+            VarianceHomogeneity = varianceHomogeneity;
+            Notes = notes;
+        }
+
+        internal LackOfFitTest? LackOfFit { get; }
+
+        internal MandelTest? Mandel { get; }
+
+        internal VarianceHomogeneityTest? VarianceHomogeneity { get; }
+
+        internal IReadOnlyList<string> Notes { get; }
     }
 }

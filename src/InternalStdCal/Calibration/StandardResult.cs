@@ -1,6 +1,9 @@
 using System.Collections.Generic;
 using InternalStdCal.Quantities;
 
+// A regression calibration's standardised residuals are read from its fit on first use (the fit computes its residual
+// views lazily); other calibrations give the values.
+
 namespace InternalStdCal.Calibration;
 
 /// <summary>How one calibration standard came out of a calibration: its mean response, fitted response,
@@ -8,6 +11,11 @@ namespace InternalStdCal.Calibration;
 /// <remarks>Responses are analyte/IS signal ratios (dimensionless). Concentrations are in the calibration's unit.</remarks>
 public sealed class StandardResult
 {
+    private readonly double? _standardizedResidual;
+    private readonly RegressionFit? _fit;
+    private readonly int _point;
+
+    // fit and point: the regression and fit-point index whose standardised residual this is (then standardizedResidual is unused).
     internal StandardResult(
         CalibrationStandard standard,
         bool included,
@@ -19,7 +27,9 @@ public sealed class StandardResult
         Concentration? backCalculated,
         double? relativeErrorPercent,
         double? responseFactor,
-        IReadOnlyList<InjectionResult> injections)
+        IReadOnlyList<InjectionResult> injections,
+        RegressionFit? fit = null,
+        int point = -1)
     {
         Standard = standard;
         Included = included;
@@ -27,7 +37,9 @@ public sealed class StandardResult
         MeanResponse = meanResponse;
         ResponseStandardDeviation = responseStandardDeviation;
         FittedResponse = fittedResponse;
-        StandardizedResidual = standardizedResidual;
+        _standardizedResidual = standardizedResidual;
+        _fit = fit;
+        _point = point;
         BackCalculated = backCalculated;
         RelativeErrorPercent = relativeErrorPercent;
         ResponseFactor = responseFactor;
@@ -65,7 +77,7 @@ public sealed class StandardResult
     /// <summary>The standardised residual of this level's point when the fit used level means (see
     /// <see cref="ReplicateHandling.LevelMeans"/>); otherwise null (see the injections). For the response-factor
     /// model: the z-score (RF_i − mean RF)/SD of the level's response factor.</summary>
-    public double? StandardizedResidual { get; }
+    public double? StandardizedResidual => _fit is null ? _standardizedResidual : _fit.StandardizedResiduals[_point];
 
     /// <summary>Concentration read back from the mean response through the calibration function; null when the
     /// function cannot be inverted at that response (e.g. a quadratic with no real root).</summary>
@@ -86,17 +98,26 @@ public sealed class StandardResult
 /// <summary>How one injection of a calibration standard came out of a calibration.</summary>
 public sealed class InjectionResult
 {
+    private readonly double? _standardizedResidual;
+    private readonly RegressionFit? _fit;
+    private readonly int _point;
+
+    // fit and point: as for StandardResult.
     internal InjectionResult(
         Injection injection,
         double fittedResponse,
         double? standardizedResidual,
         Concentration? backCalculated,
         double? relativeErrorPercent,
-        double? responseFactor)
+        double? responseFactor,
+        RegressionFit? fit = null,
+        int point = -1)
     {
         Injection = injection;
         FittedResponse = fittedResponse;
-        StandardizedResidual = standardizedResidual;
+        _standardizedResidual = standardizedResidual;
+        _fit = fit;
+        _point = point;
         BackCalculated = backCalculated;
         RelativeErrorPercent = relativeErrorPercent;
         ResponseFactor = responseFactor;
@@ -117,7 +138,7 @@ public sealed class InjectionResult
     /// <summary>Standardised residual when every injection was a fit point (see
     /// <see cref="ReplicateHandling.EveryInjection"/>), otherwise null. For the response-factor model: the z-score
     /// (RF_ij − mean RF)/SD.</summary>
-    public double? StandardizedResidual { get; }
+    public double? StandardizedResidual => _fit is null ? _standardizedResidual : _fit.StandardizedResiduals[_point];
 
     /// <summary>Concentration read back from this injection's response; null when not invertible.</summary>
     public Concentration? BackCalculated { get; }

@@ -77,15 +77,23 @@ public sealed class ReportingLimits : IEquatable<ReportingLimits>
                 nameof(estimate));
         }
 
-        if (DetectionLimit is Concentration lod && estimate < lod)
-        {
-            return new ReportedValue(estimate, ReportedStatus.NotDetected, lod);
-        }
-
-        return estimate < QuantificationLimit
-            ? new ReportedValue(estimate, ReportedStatus.BelowQuantificationLimit, QuantificationLimit)
-            : new ReportedValue(estimate, ReportedStatus.Quantified, null);
+        ReportedStatus status = Classify(estimate);
+        return new ReportedValue(estimate, status, LimitFor(status));
     }
+
+    /// <summary>The status <see cref="Apply(Concentration)"/> gives an estimate of the limits' kind (checked by the caller).</summary>
+    internal ReportedStatus Classify(Concentration estimate) =>
+        DetectionLimit is Concentration lod && estimate < lod ? ReportedStatus.NotDetected
+        : estimate < QuantificationLimit ? ReportedStatus.BelowQuantificationLimit
+        : ReportedStatus.Quantified;
+
+    /// <summary>The limit a value of this status fell below; null when quantified.</summary>
+    internal Concentration? LimitFor(ReportedStatus status) => status switch
+    {
+        ReportedStatus.NotDetected => DetectionLimit,
+        ReportedStatus.BelowQuantificationLimit => QuantificationLimit,
+        _ => null,
+    };
 
     /// <summary>Reports the concentration of a quantitation result against the limits.</summary>
     /// <param name="result">The result; its <see cref="QuantitationResult.Concentration"/> is the estimate.</param>

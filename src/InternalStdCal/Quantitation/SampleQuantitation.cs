@@ -109,16 +109,17 @@ public static class SampleQuantitation
 
     /// <summary>
     /// The numbers <see cref="Quantify"/> gives (concentration, interval, extrapolation), bit for bit and with the same exceptions, without notes, method text or per-injection values:
-    /// for batch processing that builds the full result only when it is asked for.
+    /// for batch processing that builds the full result only when it is asked for. Takes the parts of a valid
+    /// <see cref="UnknownSample"/>: its label (<paramref name="sample"/>, so that exceptions name the same parameter), IS
+    /// concentration, mean ratio (as <see cref="UnknownSample.MeanResponse"/> forms it) and number of injections.
     /// </summary>
-    internal static QuantitationEstimate Estimate(RatioCalibration calibration, UnknownSample sample, double confidenceLevel, InverseIntervalMethod intervalMethod)
+    internal static QuantitationEstimate Estimate(RatioCalibration calibration, string sample, Concentration internalStandardConcentration, double meanRatio, int injections, double confidenceLevel, InverseIntervalMethod intervalMethod)
     {
-        double cIs = InternalStandardInCalibrationUnit(calibration, sample, confidenceLevel);
-        double meanRatio = sample.MeanResponse;
+        double cIs = InternalStandardInCalibrationUnit(calibration, sample, internalStandardConcentration, confidenceLevel);
         AxisEstimate p;
         try
         {
-            p = calibration.EstimateAxis(meanRatio, sample.Injections.Count, confidenceLevel, intervalMethod);
+            p = calibration.EstimateAxis(meanRatio, injections, confidenceLevel, intervalMethod);
         }
         catch (ArgumentOutOfRangeException e) when (e.ParamName == "response")
         {
@@ -151,20 +152,28 @@ public static class SampleQuantitation
     {
         Guard.NotNull(calibration, nameof(calibration));
         Guard.NotNull(sample, nameof(sample));
+        return InternalStandardInCalibrationUnit(calibration, sample.Label, sample.InternalStandardConcentration, confidenceLevel);
+    }
+
+    // sample: the sample's label.
+    private static double InternalStandardInCalibrationUnit(RatioCalibration calibration, string sample, Concentration isConc, double confidenceLevel)
+    {
         Guard.InOpenRange(confidenceLevel, 0, 1, nameof(confidenceLevel));
-        Concentration isConc = sample.InternalStandardConcentration;
         if (isConc.Kind != Concentration.KindOf(calibration.Unit))
         {
             throw new ArgumentException(
-                $"Parameter 'sample': the IS concentration of '{sample.Label}' is {isConc} ({isConc.Kind}) but the calibration is in {Concentration.SymbolOf(calibration.Unit)} ({Concentration.KindOf(calibration.Unit)}); the kinds must match.",
+                $"Parameter 'sample': the IS concentration of '{sample}' is {isConc} ({isConc.Kind}) but the calibration is in {Concentration.SymbolOf(calibration.Unit)} ({Concentration.KindOf(calibration.Unit)}); the kinds must match.",
                 nameof(sample));
         }
 
         return isConc.In(calibration.Unit);
     }
 
-    private static ArgumentException Unreadable(UnknownSample sample, ArgumentOutOfRangeException e) =>
-        new($"Parameter 'sample': the mean ratio of '{sample.Label}' cannot be read off the calibration function. {e.Message}", nameof(sample), e);
+    private static ArgumentException Unreadable(UnknownSample sample, ArgumentOutOfRangeException e) => Unreadable(sample.Label, e);
+
+    // sample: the sample's label.
+    private static ArgumentException Unreadable(string sample, ArgumentOutOfRangeException e) =>
+        new($"Parameter 'sample': the mean ratio of '{sample}' cannot be read off the calibration function. {e.Message}", nameof(sample), e);
 
     private static ExtrapolationStatus Extrapolation(RatioCalibration calibration, double x) =>
         x < calibration.LowestX ? ExtrapolationStatus.BelowLowestStandard

@@ -2,6 +2,7 @@ using System;
 using System.Collections.Generic;
 using System.Linq;
 using System.Threading;
+using InternalStdCal.Calibration;
 using InternalStdCal.Limits;
 using InternalStdCal.Preparation;
 using InternalStdCal.Quantitation;
@@ -19,57 +20,59 @@ namespace InternalStdCal.Run;
 /// <see cref="Notes"/>.</remarks>
 public sealed class AnalyteResult
 {
-    private readonly IResultSource? _source;
-    private QuantitationResult? _quantitation;
-    private SampleResult? _sampleCalculation;
+    // Stand-ins for the two notes every quantified result has, formatted on first read of Notes.
+    private static readonly string UsedInjectionsNoteMarker = new('\u0001', 1);
+    private static readonly string OriginalSampleNoteMarker = new('\u0002', 1);
 
-    internal AnalyteResult(
-        string sampleId,
-        InjectionRole role,
-        string analyte,
-        IReadOnlyList<int> injectionOrders,
-        Concentration? inMeasuredSolution,
-        Concentration? measuredLower,
-        Concentration? measuredUpper,
-        Concentration? sampleLower,
-        Concentration? sampleUpper,
-        ReportedValue? reported,
-        ResultQualifiers qualifiers,
-        IReadOnlyList<string> notes,
-        IResultSource? source)
+    // The usual notes, shared until a result gets another note (then it copies them into its own array).
+    private static readonly string[] UsualNotes = { UsedInjectionsNoteMarker, OriginalSampleNoteMarker };
+    private static readonly IReadOnlyList<string> NoNotes = Array.AsReadOnly(Array.Empty<string>());
+
+    private readonly AnalyteContext _context;
+    private IReadOnlyList<RunInjection>? _used;
+    private string[]? _noteEntries;
+    private int _noteCount;
+    private Flags _flags;
+    private double _meanRatio;
+    private double _measured;
+    private double _measuredLower;
+    private double _measuredUpper;
+    private double _sample;
+    private double _sampleLower;
+    private double _sampleUpper;
+    private ConcentrationUnit _sampleUnit;
+    private Deferred? _deferred;
+
+    // Rows of one sample (all analytes share the array and the orders) for one analyte; filled in by RunProcessor
+    // before the report is returned, read-only afterwards. The quantitation, back-calculation, reported value and
+    // notes are built from these values on first read.
+    internal AnalyteResult(AnalyteContext context, RunInjection[] rows, IReadOnlyList<int> injectionOrders)
     {
-        SampleId = sampleId;
-        Role = role;
-        Analyte = analyte;
+        _context = context;
+        Rows = rows;
         InjectionOrders = injectionOrders;
-        InMeasuredSolution = inMeasuredSolution;
-        MeasuredLower = measuredLower;
-        MeasuredUpper = measuredUpper;
-        SampleLower = sampleLower;
-        SampleUpper = sampleUpper;
-        Reported = reported;
-        Qualifiers = qualifiers;
-        Notes = notes;
-        _source = source;
     }
 
-    /// <summary>Builds the quantitation and the back-calculation of a result on first use (same numbers as the
-    /// values the result was made with).</summary>
-    internal interface IResultSource
+    [Flags]
+    private enum Flags : byte
     {
-        QuantitationResult? Quantitation();
-
-        SampleResult? SampleCalculation(QuantitationResult quantitation);
+        None = 0,
+        Quantified = 1,
+        MeasuredLower = 2,
+        MeasuredUpper = 4,
+        InSample = 8,
+        SampleInterval = 16,
+        Reported = 32,
     }
 
     /// <summary>Id of the sample.</summary>
-    public string SampleId { get; }
+    public string SampleId => Rows[0].Id;
 
     /// <summary>Role of the sample's rows.</summary>
-    public InjectionRole Role { get; }
+    public InjectionRole Role => Rows[0].Role;
 
     /// <summary>Analyte name.</summary>
-    public string Analyte { get; }
+    public string Analyte => _context.Analyte;
 
     /// <summary>Injection orders of the sample's rows (all of them, used or set aside).</summary>
     public IReadOnlyList<int> InjectionOrders { get; }
@@ -77,23 +80,26 @@ public sealed class AnalyteResult
     /// <summary>The quantitation in the measured solution (calibration unit); null when not quantified.</summary>
     /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
     public QuantitationResult? Quantitation =>
-        Volatile.Read(ref _quantitation) ?? (_source?.Quantitation() is QuantitationResult q ? Interlocked.CompareExchange(ref _quantitation, q, null) ?? q : null);
+        IsQuantified ? Volatile.Read(ref Parts.Quantitation) ?? Interlocked.CompareExchange(ref Parts.Quantitation, Quantify(), null) ?? Parts.Quantitation! : null;
 
     /// <summary>Concentration in the measured solution (calibration unit); null when not quantified.</summary>
-    public Concentration? InMeasuredSolution { get; }
+    public Concentration? InMeasuredSolution => IsQuantified ? InMeasuredUnit(_measured) : null;
 
     /// <summary>Lower confidence limit in the measured solution; null without an interval.</summary>
-    public Concentration? MeasuredLower { get; }
+    public Concentration? MeasuredLower => (_flags & Flags.MeasuredLower) != 0 ? InMeasuredUnit(_measuredLower) : null;
 
     /// <summary>Upper confidence limit in the measured solution; null without an interval.</summary>
-    public Concentration? MeasuredUpper { get; }
+    public Concentration? MeasuredUpper => (_flags & Flags.MeasuredUpper) != 0 ? InMeasuredUnit(_measuredUpper) : null;
 
     /// <summary>The back-calculation to the original sample (dilutions, digest, sample mass) with its uncertainty
     /// budget; null when not quantified or when the preparation does not fit the result's kind (see <see cref="Notes"/>).</summary>
     /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
     public SampleResult? SampleCalculation =>
-        Volatile.Read(ref _sampleCalculation)
-        ?? (Quantitation is QuantitationResult q && _source!.SampleCalculation(q) is SampleResult s ? Interlocked.CompareExchange(ref _sampleCalculation, s, null) ?? s : null);
+        (_flags & Flags.InSample) != 0 && Quantitation is QuantitationResult q
+            ? Volatile.Read(ref Parts.SampleCalculation)
+                ?? Interlocked.CompareExchange(ref Parts.SampleCalculation, Rows[0].Preparation.ToSample(q.AsMeasured() ?? Measured.Exact(q.Concentration)), null)
+                ?? Parts.SampleCalculation!
+            : null;
 
     /// <summary>Concentration in the original sample with its standard uncertainty (calibration standard error
     /// and preparation terms combined, see <see cref="SampleResult"/>); null as <see cref="SampleCalculation"/>.</summary>
@@ -101,10 +107,10 @@ public sealed class AnalyteResult
 
     /// <summary>Lower confidence limit of the measured solution carried to the original sample (the back-calculation is
     /// linear); null without an interval.</summary>
-    public Concentration? SampleLower { get; }
+    public Concentration? SampleLower => (_flags & Flags.SampleInterval) != 0 ? Concentration.From(_sampleLower, _sampleUnit) : null;
 
     /// <summary>Upper confidence limit carried to the original sample; null without an interval.</summary>
-    public Concentration? SampleUpper { get; }
+    public Concentration? SampleUpper => (_flags & Flags.SampleInterval) != 0 ? Concentration.From(_sampleUpper, _sampleUnit) : null;
 
     /// <summary>
     /// The original-sample result as reported against the analyte's <see cref="AnalyteMethod.Limits"/>: quantified,
@@ -115,13 +121,25 @@ public sealed class AnalyteResult
     /// </summary>
     /// <remarks>The limits are the method's LOD/LOQ in the original sample (common practice), so a diluted sample is
     /// judged after its dilution factor is applied, not in the measured solution.</remarks>
-    public ReportedValue? Reported { get; }
+    /// <remarks>Built on first use (thread-safe; every caller sees the same instance).</remarks>
+    public ReportedValue? Reported =>
+        (_flags & Flags.Reported) != 0 ? Volatile.Read(ref Parts.Reported) ?? Interlocked.CompareExchange(ref Parts.Reported, Report(), null) ?? Parts.Reported! : null;
 
     /// <summary>The qualifier flags of the result.</summary>
-    public ResultQualifiers Qualifiers { get; }
+    public ResultQualifiers Qualifiers { get; internal set; }
 
     /// <summary>The trail: what was used, what was set aside and why, what each qualifier refers to.</summary>
-    public IReadOnlyList<string> Notes { get; }
+    /// <remarks>Formatted on first use (thread-safe; every caller sees the same instance).</remarks>
+    public IReadOnlyList<string> Notes => Volatile.Read(ref Parts.Notes) ?? Interlocked.CompareExchange(ref Parts.Notes, FormatNotes(), null) ?? Parts.Notes!;
+
+    /// <summary>The sample's rows (all of them, used or set aside), in injection order.</summary>
+    internal RunInjection[] Rows { get; }
+
+    /// <summary>True when the result has a value in the measured solution.</summary>
+    internal bool IsQuantified => (_flags & Flags.Quantified) != 0;
+
+    /// <summary>The value in the original sample (without its uncertainty budget); null without one.</summary>
+    internal Concentration? SampleValue => (_flags & Flags.InSample) != 0 ? Concentration.From(_sample, _sampleUnit) : null;
 
     /// <summary>True when <paramref name="flag"/> is set.</summary>
     /// <param name="flag">A flag.</param>
@@ -178,5 +196,145 @@ public sealed class AnalyteResult
         }
 
         return ResultUncertaintyBudget.Create(q, prep, null, factors, factorExponents, addReplicateRepeatability, coverageProbability, correlations);
+    }
+
+    /// <summary>Adds a note (while the run is processed).</summary>
+    internal void AddNote(string text)
+    {
+        if (_noteEntries is null || ReferenceEquals(_noteEntries, UsualNotes) || _noteCount == _noteEntries.Length)
+        {
+            string[] grown = new string[Math.Max(4, 2 * _noteCount)];
+            if (_noteEntries is not null)
+            {
+                Array.Copy(_noteEntries, grown, _noteCount);
+            }
+
+            _noteEntries = grown;
+        }
+
+        _noteEntries[_noteCount++] = text;
+    }
+
+    /// <summary>Records the value read off the calibration (<paramref name="used"/> null: every row was used) and
+    /// adds the "Injections used" note.</summary>
+    internal void Quantified(IReadOnlyList<RunInjection>? used, double meanRatio, Concentration value, Concentration? lower, Concentration? upper)
+    {
+        _used = used;
+        _meanRatio = meanRatio;
+        _measured = value.Value;
+        _flags |= Flags.Quantified;
+        if (lower is Concentration lo)
+        {
+            _measuredLower = lo.Value;
+            _flags |= Flags.MeasuredLower;
+        }
+
+        if (upper is Concentration hi)
+        {
+            _measuredUpper = hi.Value;
+            _flags |= Flags.MeasuredUpper;
+        }
+
+        if (_noteCount == 0)
+        {
+            _noteEntries = UsualNotes;
+            _noteCount = 1;
+        }
+        else
+        {
+            AddNote(UsedInjectionsNoteMarker);
+        }
+    }
+
+    /// <summary>Records the value carried to the original sample (the interval ends carried with it, or none) and adds
+    /// the "Original sample" note.</summary>
+    internal void InOriginalSample(Concentration value, Concentration? lower, Concentration? upper)
+    {
+        _sample = value.Value;
+        _sampleUnit = value.Unit;
+        _flags |= Flags.InSample;
+        if (lower is Concentration lo && upper is Concentration hi)
+        {
+            _sampleLower = lo.Value; // same preparation and input unit as the value, so the same unit
+            _sampleUpper = hi.Value;
+            _flags |= Flags.SampleInterval;
+        }
+
+        if (ReferenceEquals(_noteEntries, UsualNotes) && _noteCount == 1)
+        {
+            _noteCount = 2;
+        }
+        else
+        {
+            AddNote(OriginalSampleNoteMarker);
+        }
+    }
+
+    /// <summary>Records that the value in the original sample is reported against the analyte's limits (or as
+    /// quantified without limits); the <see cref="ReportedValue"/> is made on first read.</summary>
+    internal void MarkReported() => _flags |= Flags.Reported;
+
+    // The parts built on first read, in one object made on the first such read.
+    private Deferred Parts => Volatile.Read(ref _deferred) ?? Interlocked.CompareExchange(ref _deferred, new Deferred(), null) ?? _deferred!;
+
+    private Concentration InMeasuredUnit(double value) => Concentration.From(value, _context.Calibration.Calibration!.Unit);
+
+    // The rows whose ratios were averaged.
+    private IReadOnlyList<RunInjection> Used => _used ?? Rows;
+
+    private QuantitationResult Quantify()
+    {
+        AnalyteContext c = _context;
+        IReadOnlyList<RunInjection> used = Used;
+        var injections = new Injection[used.Count];
+        string internalStandard = c.Method.InternalStandard;
+        for (int i = 0; i < injections.Length; i++)
+        {
+            InjectionSignals signals = used[i].Signals;
+            injections[i] = new Injection(signals.Analyte(c.Analyte)!.Value, signals.InternalStandard(internalStandard)!.Value);
+        }
+
+        UnknownSample sample = UnknownSample.Create(SampleId, c.InternalStandardConcentration, injections);
+        return SampleQuantitation.Quantify(c.Calibration.Calibration!, sample, c.RunMethod.ConfidenceLevel, c.RunMethod.IntervalMethod);
+    }
+
+    private ReportedValue Report()
+    {
+        Concentration value = SampleValue!.Value;
+        return _context.Method.Limits is ReportingLimits limits ? limits.Apply(value) : new ReportedValue(value, ReportedStatus.Quantified, null);
+    }
+
+    private IReadOnlyList<string> FormatNotes()
+    {
+        if (_noteCount == 0)
+        {
+            return NoNotes;
+        }
+
+        string[] texts = new string[_noteCount];
+        for (int i = 0; i < texts.Length; i++)
+        {
+            string entry = _noteEntries![i];
+            texts[i] = ReferenceEquals(entry, UsedInjectionsNoteMarker) ? UsedInjectionsNote()
+                : ReferenceEquals(entry, OriginalSampleNoteMarker) ? OriginalSampleNote()
+                : entry;
+        }
+
+        return Array.AsReadOnly(texts);
+    }
+
+    private string UsedInjectionsNote() =>
+        "Injections used: " + string.Join(", ", Used.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(_meanRatio) + " → "
+        + InMeasuredUnit(_measured).ToString("G6", null) + " in the measured solution.";
+
+    private string OriginalSampleNote() => "Original sample: " + Rows[0].Preparation + " → " + SampleValue!.Value.ToString("G6", null) + ".";
+
+    // Fields so that each part can be published with Interlocked.CompareExchange.
+    private sealed class Deferred
+    {
+        internal QuantitationResult? Quantitation;
+        internal SampleResult? SampleCalculation;
+        internal ReportedValue? Reported;
+        internal IReadOnlyList<string>? Notes;
     }
 }

@@ -6,7 +6,10 @@ namespace InternalStdCal.Run;
 /// <summary>Recovery of one quality-control / check-standard injection for one analyte: 100 · found / nominal.</summary>
 public sealed class QualityControlCheck
 {
-    internal QualityControlCheck(RunInjection injection, string analyte, Concentration nominal, Concentration? found, double? recoveryPercent, RecoveryWindow? window, bool? passed, IReadOnlyList<string> notes)
+    private readonly AnalyteResult _notes;
+
+    // notes: the QC injection's result, whose notes are formatted on first read.
+    internal QualityControlCheck(RunInjection injection, string analyte, Concentration nominal, Concentration? found, double? recoveryPercent, RecoveryWindow? window, bool? passed, AnalyteResult notes)
     {
         Injection = injection;
         Analyte = analyte;
@@ -15,7 +18,7 @@ public sealed class QualityControlCheck
         RecoveryPercent = recoveryPercent;
         Window = window;
         Passed = passed;
-        Notes = notes;
+        _notes = notes;
     }
 
     /// <summary>The QC row.</summary>
@@ -41,7 +44,7 @@ public sealed class QualityControlCheck
     public bool? Passed { get; }
 
     /// <summary>Why a value is missing, if it is.</summary>
-    public IReadOnlyList<string> Notes { get; }
+    public IReadOnlyList<string> Notes => _notes.Notes;
 }
 
 /// <summary>Relative percent difference of a sample and its duplicate for one analyte, on the original-sample results:

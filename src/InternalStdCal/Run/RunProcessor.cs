@@ -68,27 +68,22 @@ public static class RunProcessor
         var state = new State(run, method);
         state.Recoveries();
         var calibrations = new List<AnalyteCalibration>();
-        var perAnalyte = new List<List<ResultBuilder>>(method.Analytes.Count);
+        var results = new List<AnalyteResult>(method.Analytes.Count * state.SampleCount);
         var qc = new List<QualityControlCheck>();
         foreach (AnalyteMethod a in method.Analytes)
         {
-            AnalyteCalibration cal = state.Calibrate(a);
-            calibrations.Add(cal);
-            List<ResultBuilder> analyteResults = state.QuantifySamples(a, cal);
-            List<QualityControlCheck> checks = state.QualityControl(a, cal);
-            State.Bracket(checks, analyteResults);
-            perAnalyte.Add(analyteResults);
+            AnalyteContext context = state.Calibrate(a);
+            calibrations.Add(context.Calibration);
+            int first = results.Count;
+            state.QuantifySamples(context, results);
+            List<QualityControlCheck> checks = state.QualityControl(context);
+            State.Bracket(checks, results, first);
             qc.AddRange(checks);
         }
 
         var duplicates = new List<DuplicateCheck>();
         var spikes = new List<SpikeCheck>();
-        state.PairChecks(perAnalyte, duplicates, spikes);
-        var results = new List<AnalyteResult>(perAnalyte.Sum(l => l.Count));
-        foreach (List<ResultBuilder> analyteResults in perAnalyte)
-        {
-            results.AddRange(analyteResults.Select(r => r.Build()));
-        }
+        state.PairChecks(results, duplicates, spikes);
 
         var notes = run.Analytes.Where(a => method.For(a) is null)
             .Select(a => "Analyte '" + a + "' is declared in the run but not in the method; it was not processed.")
@@ -217,152 +212,23 @@ public static class RunProcessor
         }
     }
 
-    // One sample × analyte while the run is processed; afterwards the source of the result's quantitation, sample
-    // calculation and notes, which are built only when asked for.
-    private sealed class ResultBuilder : AnalyteResult.IResultSource
-    {
-        internal ResultBuilder(string id, InjectionRole role, string analyte, RunInjection[] rows, IReadOnlyList<int> orders)
-        {
-            Id = id;
-            Role = role;
-            Analyte = analyte;
-            Rows = rows;
-            Orders = orders;
-            Notes = new NoteList(this);
-        }
-
-        internal string Id { get; }
-
-        internal InjectionRole Role { get; }
-
-        internal string Analyte { get; }
-
-        internal RunInjection[] Rows { get; }
-
-        internal IReadOnlyList<int> Orders { get; }
-
-        internal NoteList Notes { get; }
-
-        internal ResultQualifiers Qualifiers { get; set; }
-
-        // What SampleQuantitation.Quantify is called with (again) when the quantitation is asked for.
-        internal RatioCalibration? Calibration { get; private set; }
-
-        internal UnknownSample? Sample { get; private set; }
-
-        internal RunMethod? Method { get; private set; }
-
-        internal IReadOnlyList<RunInjection>? Used { get; private set; }
-
-        internal QuantitationEstimate? Estimate { get; private set; }
-
-        internal SamplePreparation? Preparation { get; private set; }
-
-        internal Concentration? InSample { get; private set; }
-
-        internal Concentration? SampleLower { get; private set; }
-
-        internal Concentration? SampleUpper { get; private set; }
-
-        internal ReportedValue? Reported { get; set; }
-
-        internal void Quantified(RatioCalibration calibration, UnknownSample sample, RunMethod method, IReadOnlyList<RunInjection> used, QuantitationEstimate estimate)
-        {
-            Calibration = calibration;
-            Sample = sample;
-            Method = method;
-            Used = used;
-            Estimate = estimate;
-        }
-
-        internal void InOriginalSample(SamplePreparation preparation, Concentration value, Concentration? lower, Concentration? upper)
-        {
-            Preparation = preparation;
-            InSample = value;
-            SampleLower = lower;
-            SampleUpper = upper;
-        }
-
-        public QuantitationResult? Quantitation() =>
-            Estimate is null ? null : SampleQuantitation.Quantify(Calibration!, Sample!, Method!.ConfidenceLevel, Method.IntervalMethod);
-
-        public SampleResult? SampleCalculation(QuantitationResult quantitation) =>
-            InSample is null ? null : Preparation!.ToSample(quantitation.AsMeasured() ?? Measured.Exact(quantitation.Concentration));
-
-        internal AnalyteResult Build() =>
-            new(Id, Role, Analyte, Orders, Estimate?.Concentration, Estimate?.Lower, Estimate?.Upper, SampleLower, SampleUpper, Reported, Qualifiers, Notes, Estimate is null ? null : this);
-
-        internal string UsedInjectionsNote()
-        {
-            QuantitationEstimate q = Estimate!.Value;
-            return "Injections used: " + string.Join(", ", Used!.Select(r => Text.I(r.Order))) + "; mean ratio " + Text.G(q.MeanResponse) + " → " + q.Concentration.ToString("G6", null) + " in the measured solution.";
-        }
-
-        internal string OriginalSampleNote() => "Original sample: " + Preparation + " → " + InSample!.Value.ToString("G6", null) + ".";
-    }
-
-    // The notes of a result in order; the two every quantified result has are formatted on first read (thread-safe).
-    private sealed class NoteList : IReadOnlyList<string>
-    {
-        private readonly ResultBuilder _owner;
-        private (string? Text, bool OriginalSample)[] _entries = new (string?, bool)[2];
-        private int _count;
-        private string[]? _texts;
-
-        internal NoteList(ResultBuilder owner) => _owner = owner;
-
-        public int Count => _count;
-
-        public string this[int index] => Texts()[index];
-
-        internal void Add(string text) => Append((text, false));
-
-        // "Injections used: …" (text null, false) and "Original sample: …" (text null, true).
-        internal void AddUsedInjections() => Append((null, false));
-
-        internal void AddOriginalSample() => Append((null, true));
-
-        public IEnumerator<string> GetEnumerator() => ((IEnumerable<string>)Texts()).GetEnumerator();
-
-        System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
-
-        private void Append((string?, bool) entry)
-        {
-            if (_count == _entries.Length)
-            {
-                Array.Resize(ref _entries, 2 * _count);
-            }
-
-            _entries[_count++] = entry;
-        }
-
-        private string[] Texts()
-        {
-            string[]? texts = Volatile.Read(ref _texts);
-            if (texts is null)
-            {
-                texts = new string[_count];
-                for (int i = 0; i < texts.Length; i++)
-                {
-                    (string? text, bool originalSample) = _entries[i];
-                    texts[i] = text ?? (originalSample ? _owner.OriginalSampleNote() : _owner.UsedInjectionsNote());
-                }
-
-                texts = Interlocked.CompareExchange(ref _texts, texts, null) ?? texts;
-            }
-
-            return texts;
-        }
-    }
-
     private sealed class State
     {
+        // The notes of a check without notes (one read-only instance for all).
+        private static readonly IReadOnlyList<string> NoNotes = Array.AsReadOnly(Array.Empty<string>());
+
         private readonly AnalyticalRun _run;
         private readonly RunMethod _method;
         private readonly Dictionary<int, RowState> _rows = new();
         private readonly Dictionary<string, double?> _references = new(StringComparer.Ordinal);
         private readonly List<RunInjection[]> _samples;
         private readonly List<IReadOnlyList<int>> _sampleOrders;
+        private readonly List<RowState[]> _sampleStates;
+        private readonly List<RunInjection[]> _calibrationLevels;
+        private readonly double[] _ratios;
+
+        // Each quality-control row (as a one-row sample) with its state, in injection order.
+        private readonly List<(RunInjection[] Row, RowState[] State)> _qualityControls;
         private readonly Dictionary<string, int> _samplePosition = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _analyteIndex = new(StringComparer.Ordinal);
         private readonly Dictionary<string, int> _isIndex = new(StringComparer.Ordinal);
@@ -394,16 +260,25 @@ public static class RunProcessor
             // Sample-like rows by id, in order of first injection (as GroupBy), formed once for all analytes.
             _samples = run.Injections.Where(r => r.IsSampleLike).GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
             _sampleOrders = _samples.Select(g => (IReadOnlyList<int>)Array.AsReadOnly(g.Select(r => r.Order).ToArray())).ToList();
+            _sampleStates = _samples.Select(g => g.Select(r => _rows[r.Order]).ToArray()).ToList();
             for (int i = 0; i < _samples.Count; i++)
             {
                 _samplePosition.Add(_samples[i][0].Id, i);
             }
+
+            // Calibration rows by id (a level and its replicate injections), in order of first injection (as GroupBy).
+            _calibrationLevels = run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank)
+                .GroupBy(r => r.Id, StringComparer.Ordinal).Select(g => g.ToArray()).ToList();
+            _qualityControls = run.Injections.Where(r => r.Role == InjectionRole.QualityControl).Select(r => (new[] { r }, new[] { _rows[r.Order] })).ToList();
+            _ratios = new double[Math.Max(1, _samples.Count == 0 ? 1 : _samples.Max(g => g.Length))];
         }
+
+        internal int SampleCount => _samples.Count;
 
         internal IReadOnlyDictionary<string, double?> References => _references;
 
         // Brackets are formed by the QC injections that carry a nominal value of this analyte, in injection order.
-        internal static void Bracket(List<QualityControlCheck> checks, List<ResultBuilder> results)
+        internal static void Bracket(List<QualityControlCheck> checks, List<AnalyteResult> results, int first)
         {
             int[] qcOrders = checks.Select(c => c.Injection.Order).ToArray();
             foreach (QualityControlCheck c in checks.Where(c => c.Passed == false))
@@ -411,41 +286,53 @@ public static class RunProcessor
                 int k = Array.IndexOf(qcOrders, c.Injection.Order);
                 int previous = k > 0 ? qcOrders[k - 1] : int.MinValue;
                 int next = k < qcOrders.Length - 1 ? qcOrders[k + 1] : int.MaxValue;
-                foreach (ResultBuilder r in results)
+                for (int i = first; i < results.Count; i++)
                 {
+                    AnalyteResult r = results[i];
                     if (r.Rows.Any(row => row.Order > previous && row.Order < next))
                     {
                         r.Qualifiers |= ResultQualifiers.QualityControlFailureInBracket;
-                        r.Notes.Add("QC " + c.Injection + " failed (recovery " + (c.RecoveryPercent is double p ? Text.F(p, 1) + " %" : "not computed")
+                        r.AddNote("QC " + c.Injection + " failed (recovery " + (c.RecoveryPercent is double p ? Text.F(p, 1) + " %" : "not computed")
                             + ") and brackets this sample (injections between QC orders " + OrderText(previous) + " and " + OrderText(next) + ").");
                     }
                 }
             }
         }
 
-        // perAnalyte: each method analyte's results, in the order of _samples, so a parent is found by its id's position.
-        internal void PairChecks(List<List<ResultBuilder>> perAnalyte, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
+        // results: each method analyte's results in turn, each in the order of _samples, so a parent is found by its id's position.
+        internal void PairChecks(List<AnalyteResult> results, List<DuplicateCheck> duplicates, List<SpikeCheck> spikes)
         {
-            for (int k = 0; k < perAnalyte.Count; k++)
+            int n = _samples.Count;
+            for (int k = 0; k < _method.Analytes.Count; k++)
             {
                 AnalyteMethod a = _method.Analytes[k];
-                List<ResultBuilder> byPosition = perAnalyte[k];
-                foreach (ResultBuilder d in byPosition.Where(r => r.Role == InjectionRole.SampleDuplicate))
+                int offset = k * n;
+                for (int i = 0; i < n; i++)
                 {
-                    ResultBuilder parent = byPosition[_samplePosition[d.Rows[0].ParentId!]];
-                    duplicates.Add(Duplicate(a.Analyte, parent, d, _method.DuplicateRpd));
+                    AnalyteResult d = results[offset + i];
+                    if (d.Role == InjectionRole.SampleDuplicate)
+                    {
+                        AnalyteResult parent = results[offset + _samplePosition[d.Rows[0].ParentId!]];
+                        duplicates.Add(Duplicate(a.Analyte, parent, d, _method.DuplicateRpd));
+                    }
                 }
 
-                foreach (ResultBuilder s in byPosition.Where(r => r.Role == InjectionRole.SpikedSample))
+                for (int i = 0; i < n; i++)
                 {
-                    RunInjection row = s.Rows[0];
-                    if (!row.Added.TryGetValue(a.Analyte, out Concentration added))
+                    AnalyteResult s = results[offset + i];
+                    if (s.Role != InjectionRole.SpikedSample)
                     {
-                        s.Notes.Add("No spike recovery: no added amount for " + a.Analyte + ".");
                         continue;
                     }
 
-                    spikes.Add(Spike(a.Analyte, byPosition[_samplePosition[row.ParentId!]], s, added, _method.SpikeRecovery));
+                    RunInjection row = s.Rows[0];
+                    if (!row.Added.TryGetValue(a.Analyte, out Concentration added))
+                    {
+                        s.AddNote("No spike recovery: no added amount for " + a.Analyte + ".");
+                        continue;
+                    }
+
+                    spikes.Add(Spike(a.Analyte, results[offset + _samplePosition[row.ParentId!]], s, added, _method.SpikeRecovery));
                 }
             }
         }
@@ -483,21 +370,21 @@ public static class RunProcessor
             }
         }
 
-        internal AnalyteCalibration Calibrate(AnalyteMethod a)
+        // The analyte's calibration with its acceptance, and what its results share.
+        internal AnalyteContext Calibrate(AnalyteMethod a)
         {
             int ai = _analyteIndex[a.Analyte];
             Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
-            RunInjection[] calRows = _run.Injections.Where(r => r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank).ToArray();
             bool rf = a.Model is RatioModel.AverageResponseFactor or RatioModel.SinglePointResponseFactor;
-            ConcentrationUnit? unit = calRows.Where(r => r.Nominal.ContainsKey(a.Analyte)).Select(r => (ConcentrationUnit?)r.Nominal[a.Analyte].Unit).FirstOrDefault();
+            ConcentrationUnit? unit = UnitOf(a.Analyte);
             var standards = new List<CalibrationStandard>();
             var used = new List<RunInjection>();
-            foreach (IGrouping<string, RunInjection> level in calRows.GroupBy(r => r.Id, StringComparer.Ordinal))
+            foreach (RunInjection[] level in _calibrationLevels)
             {
-                var injections = new List<Injection>();
-                var levelRows = new List<RunInjection>();
+                var injections = new List<Injection>(level.Length);
+                var levelRows = new List<RunInjection>(level.Length);
                 Concentration nominal;
-                if (level.First().Role == InjectionRole.CalibrationBlank)
+                if (level[0].Role == InjectionRole.CalibrationBlank)
                 {
                     if (rf || unit is null)
                     {
@@ -512,7 +399,7 @@ public static class RunProcessor
 
                     nominal = Concentration.From(0, unit.Value);
                 }
-                else if (!level.First().Nominal.TryGetValue(a.Analyte, out nominal))
+                else if (!level[0].Nominal.TryGetValue(a.Analyte, out nominal))
                 {
                     foreach (RunInjection r in level)
                     {
@@ -546,7 +433,7 @@ public static class RunProcessor
 
                 if (injections.Count > 0)
                 {
-                    standards.Add(new CalibrationStandard(level.Key, nominal, cIs, injections));
+                    standards.Add(new CalibrationStandard(level[0].Id, nominal, cIs, injections));
                     used.AddRange(levelRows);
                 }
             }
@@ -579,47 +466,59 @@ public static class RunProcessor
                 }
             }
 
-            return new AnalyteCalibration(a, calibration, verdict, failure, used.Select(r => r.Order).ToList());
+            var result = new AnalyteCalibration(a, calibration, verdict, failure, used.Select(r => r.Order).ToList());
+            return new AnalyteContext(_method, a, ai, _isIndex[a.InternalStandard], cIs, result);
         }
 
-        internal List<ResultBuilder> QuantifySamples(AnalyteMethod a, AnalyteCalibration cal)
+        // Unit of the first nominal concentration of the analyte among the calibration rows, in injection order.
+        private ConcentrationUnit? UnitOf(string analyte)
         {
-            int ai = _analyteIndex[a.Analyte];
-            var list = new List<ResultBuilder>(_samples.Count);
-            for (int i = 0; i < _samples.Count; i++)
+            foreach (RunInjection r in _run.Injections)
             {
-                RunInjection[] g = _samples[i];
-                var b = new ResultBuilder(g[0].Id, g[0].Role, a.Analyte, g, _sampleOrders[i]);
-                Quantify(a, ai, cal, b, InjectionStatus.Quantified);
-                if (b.Estimate is QuantitationEstimate q)
+                if (r.Role is InjectionRole.CalibrationStandard or InjectionRole.CalibrationBlank && r.Nominal.TryGetValue(analyte, out Concentration c))
                 {
-                    ToSample(b, q);
-                    ApplyLimits(a, b);
+                    return c.Unit;
                 }
-
-                list.Add(b);
             }
 
-            return list;
+            return null;
         }
 
-        internal List<QualityControlCheck> QualityControl(AnalyteMethod a, AnalyteCalibration cal)
+        // Appends one result per sample, in the order of _samples.
+        internal void QuantifySamples(AnalyteContext c, List<AnalyteResult> results)
         {
-            int ai = _analyteIndex[a.Analyte];
+            for (int i = 0; i < _samples.Count; i++)
+            {
+                var b = new AnalyteResult(c, _samples[i], _sampleOrders[i]);
+                if (Quantify(c, b, _sampleStates[i], InjectionStatus.Quantified) is QuantitationEstimate q)
+                {
+                    ToSample(b, q);
+                    ApplyLimits(c.Method, b);
+                }
+
+                results.Add(b);
+            }
+        }
+
+        internal List<QualityControlCheck> QualityControl(AnalyteContext c)
+        {
+            AnalyteMethod a = c.Method;
+            int ai = c.Index;
             var checks = new List<QualityControlCheck>();
             RecoveryWindow? window = _method.QualityControlRecovery;
-            foreach (RunInjection r in _run.Injections.Where(r => r.Role == InjectionRole.QualityControl))
+            foreach ((RunInjection[] qcRow, RowState[] qcState) in _qualityControls)
             {
+                RunInjection r = qcRow[0];
                 if (!r.Nominal.TryGetValue(a.Analyte, out Concentration nominal))
                 {
                     _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no nominal concentration for this analyte; not evaluated.");
                     continue;
                 }
 
-                var b = new ResultBuilder(r.Id, r.Role, a.Analyte, new[] { r }, Array.Empty<int>());
-                Quantify(a, ai, cal, b, InjectionStatus.QualityControlEvaluated);
+                var b = new AnalyteResult(c, qcRow, Array.Empty<int>());
+                QuantitationEstimate? estimate = Quantify(c, b, qcState, InjectionStatus.QualityControlEvaluated);
                 double? recovery = null;
-                if (b.Estimate is QuantitationEstimate q)
+                if (estimate is QuantitationEstimate q)
                 {
                     if (nominal.Kind == q.Concentration.Kind)
                     {
@@ -627,7 +526,7 @@ public static class RunProcessor
                     }
                     else
                     {
-                        b.Notes.Add("Nominal " + nominal + " is of another kind than the calibration (" + q.Concentration.Kind + "); no recovery.");
+                        b.AddNote("Nominal " + nominal + " is of another kind than the calibration (" + q.Concentration.Kind + "); no recovery.");
                     }
                 }
 
@@ -637,7 +536,7 @@ public static class RunProcessor
                     _rows[r.Order].Reasons.Add(a.Analyte + ": QC recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + "; samples up to the neighbouring QC injections are flagged.");
                 }
 
-                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, b.Estimate?.Concentration, recovery, window, passed, b.Notes));
+                checks.Add(new QualityControlCheck(r, a.Analyte, nominal, estimate?.Concentration, recovery, window, passed, b));
             }
 
             return checks;
@@ -661,17 +560,17 @@ public static class RunProcessor
             return outcomes;
         }
 
-        private static DuplicateCheck Duplicate(string analyte, ResultBuilder parent, ResultBuilder dup, RpdLimit? limit)
+        private static DuplicateCheck Duplicate(string analyte, AnalyteResult parent, AnalyteResult dup, RpdLimit? limit)
         {
-            var notes = new List<string>();
-            Concentration? a = parent.InSample;
-            Concentration? b = dup.InSample;
+            List<string>? notes = null;
+            Concentration? a = parent.SampleValue;
+            Concentration? b = dup.SampleValue;
             double? rpd = null;
             if (a is Concentration x && b is Concentration y)
             {
                 if (x.Kind != y.Kind)
                 {
-                    notes.Add("Sample and duplicate results are of different kinds; no RPD.");
+                    (notes = new List<string>()).Add("Sample and duplicate results are of different kinds; no RPD.");
                     b = null;
                 }
                 else
@@ -685,13 +584,13 @@ public static class RunProcessor
                     }
                     else
                     {
-                        notes.Add("Mean of sample and duplicate is ≤ 0; no RPD.");
+                        (notes = new List<string>()).Add("Mean of sample and duplicate is ≤ 0; no RPD.");
                     }
                 }
             }
             else
             {
-                notes.Add("Sample or duplicate has no result in the original sample; no RPD.");
+                (notes = new List<string>()).Add("Sample or duplicate has no result in the original sample; no RPD.");
             }
 
             bool? passed = limit is null ? null : rpd is double r && r <= limit.MaxPercent;
@@ -699,25 +598,25 @@ public static class RunProcessor
             {
                 string text = "Duplicate RPD " + (rpd is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + limit + ".";
                 dup.Qualifiers |= ResultQualifiers.DuplicateRpdExceeded;
-                dup.Notes.Add(text);
+                dup.AddNote(text);
                 parent.Qualifiers |= ResultQualifiers.DuplicateRpdExceeded;
-                parent.Notes.Add(text + " (duplicate '" + dup.Id + "')");
+                parent.AddNote(text + " (duplicate '" + dup.SampleId + "')");
             }
 
-            return new DuplicateCheck(analyte, parent.Id, dup.Id, a, b, rpd, limit, passed, notes);
+            return new DuplicateCheck(analyte, parent.SampleId, dup.SampleId, a, b, rpd, limit, passed, notes ?? NoNotes);
         }
 
-        private static SpikeCheck Spike(string analyte, ResultBuilder parent, ResultBuilder spiked, Concentration added, RecoveryWindow? window)
+        private static SpikeCheck Spike(string analyte, AnalyteResult parent, AnalyteResult spiked, Concentration added, RecoveryWindow? window)
         {
-            var notes = new List<string>();
-            Concentration? s = spiked.InSample;
-            Concentration? u = parent.InSample;
+            List<string>? notes = null;
+            Concentration? s = spiked.SampleValue;
+            Concentration? u = parent.SampleValue;
             double? recovery = null;
             if (s is Concentration x && u is Concentration y)
             {
                 if (x.Kind != y.Kind || x.Kind != added.Kind)
                 {
-                    notes.Add("Spiked, unspiked and added amounts are not all of one kind; no recovery.");
+                    (notes = new List<string>()).Add("Spiked, unspiked and added amounts are not all of one kind; no recovery.");
                     u = null;
                 }
                 else
@@ -729,31 +628,19 @@ public static class RunProcessor
             }
             else
             {
-                notes.Add("Spiked or unspiked sample has no result in the original sample; no recovery.");
+                (notes = new List<string>()).Add("Spiked or unspiked sample has no result in the original sample; no recovery.");
             }
 
             bool? passed = window is null ? null : recovery is double r && window.Contains(r);
             if (passed == false)
             {
                 spiked.Qualifiers |= ResultQualifiers.SpikeRecoveryOutOfWindow;
-                spiked.Notes.Add("Spike recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + ".");
+                spiked.AddNote("Spike recovery " + (recovery is double v ? Text.F(v, 1) + " %" : "not computed") + " fails " + window + ".");
             }
 
-            return new SpikeCheck(analyte, spiked.Id, parent.Id, s, u, added, recovery, window, passed, notes);
+            return new SpikeCheck(analyte, spiked.SampleId, parent.SampleId, s, u, added, recovery, window, passed, notes ?? NoNotes);
         }
 
-        private static InternalStandardRecovery? RecoveryOf(RowState st, string internalStandard)
-        {
-            foreach (InternalStandardRecovery x in st.Recoveries)
-            {
-                if (x.InternalStandard == internalStandard)
-                {
-                    return x;
-                }
-            }
-
-            return null;
-        }
 
         private static string OrderText(int order) =>
             order == int.MinValue ? "start of run" : order == int.MaxValue ? "end of run" : Text.I(order);
@@ -763,31 +650,46 @@ public static class RunProcessor
 
         private (Injection? Injection, string? Reason) Signal(RowState st, int ai, AnalyteMethod a)
         {
+            string? why = Ratio(st, ai, _isIndex[a.InternalStandard], a.InternalStandard, out _);
+            return why is null ? (new Injection(st.AnalyteSignals[ai], st.InternalStandardSignals[_isIndex[a.InternalStandard]]), null) : (null, why);
+        }
+
+        // The ratio analyte/IS of a row, or why the row is set aside for the analyte: exactly the cases in which
+        // an Injection cannot be made (then its exception is quoted).
+        private static string? Ratio(RowState st, int ai, int isIndex, string internalStandard, out double ratio)
+        {
+            ratio = 0;
             double signal = st.AnalyteSignals[ai];
-            double isSignal = st.InternalStandardSignals[_isIndex[a.InternalStandard]];
+            double isSignal = st.InternalStandardSignals[isIndex];
             if (double.IsNaN(signal))
             {
-                return (null, "no analyte signal; set aside.");
+                return "no analyte signal; set aside.";
             }
 
             if (double.IsNaN(isSignal))
             {
-                return (null, "no signal for IS " + a.InternalStandard + "; set aside.");
+                return "no signal for IS " + internalStandard + "; set aside.";
             }
 
             if (!(isSignal > 0))
             {
-                return (null, "IS " + a.InternalStandard + " signal " + Text.G(isSignal) + " ≤ 0 is invalid; set aside.");
+                return "IS " + internalStandard + " signal " + Text.G(isSignal) + " ≤ 0 is invalid; set aside.";
             }
 
-            try
+            ratio = signal / isSignal;
+            if (double.IsInfinity(signal) || double.IsInfinity(isSignal) || double.IsInfinity(ratio))
             {
-                return (new Injection(signal, isSignal), null);
+                try
+                {
+                    _ = new Injection(signal, isSignal);
+                }
+                catch (ArgumentOutOfRangeException e)
+                {
+                    return "signals cannot form a ratio (" + e.Message + "); set aside.";
+                }
             }
-            catch (ArgumentOutOfRangeException e)
-            {
-                return (null, "signals cannot form a ratio (" + e.Message + "); set aside.");
-            }
+
+            return null;
         }
 
         private static RatioCalibration Fit(AnalyteMethod a, List<CalibrationStandard> standards)
@@ -818,41 +720,42 @@ public static class RunProcessor
         }
 
         // Limits are the method's LOD/LOQ in the original sample (common practice), so they judge InSample.
-        private static void ApplyLimits(AnalyteMethod a, ResultBuilder b)
+        private static void ApplyLimits(AnalyteMethod a, AnalyteResult b)
         {
-            if (b.InSample is not Concentration c)
+            if (b.SampleValue is not Concentration c)
             {
                 return;
             }
 
             if (a.Limits is not ReportingLimits limits)
             {
-                b.Reported = new ReportedValue(c, ReportedStatus.Quantified, null);
+                b.MarkReported();
                 return;
             }
 
             if (limits.QuantificationLimit.Kind != c.Kind)
             {
-                b.Notes.Add("Reporting limits (" + limits + ") not applied: they are of kind " + limits.QuantificationLimit.Kind + ", the result in the original sample is in "
+                b.AddNote("Reporting limits (" + limits + ") not applied: they are of kind " + limits.QuantificationLimit.Kind + ", the result in the original sample is in "
                     + Concentration.SymbolOf(c.Unit) + " (" + c.Kind + "); not censored.");
                 return;
             }
 
-            b.Reported = limits.Apply(c);
-            if (b.Reported.Status == ReportedStatus.NotDetected)
+            ReportedStatus status = limits.Classify(c);
+            b.MarkReported();
+            if (status == ReportedStatus.NotDetected)
             {
                 b.Qualifiers |= ResultQualifiers.BelowLimitOfDetection;
-                b.Notes.Add("Below the LOD (" + b.Reported.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
+                b.AddNote("Below the LOD (" + b.Reported!.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
             }
-            else if (b.Reported.Status == ReportedStatus.BelowQuantificationLimit)
+            else if (status == ReportedStatus.BelowQuantificationLimit)
             {
                 b.Qualifiers |= ResultQualifiers.BelowLimitOfQuantitation;
-                b.Notes.Add("Below the LOQ (" + b.Reported.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
+                b.AddNote("Below the LOQ (" + b.Reported!.Limit + ") in the original sample; reported as " + b.Reported + ", value kept.");
             }
         }
 
         // The value and the interval ends carried back without uncertainty budgets (built when the result is asked for one).
-        private static void ToSample(ResultBuilder b, QuantitationEstimate q)
+        private static void ToSample(AnalyteResult b, QuantitationEstimate q)
         {
             SamplePreparation prep = b.Rows[0].Preparation;
             try
@@ -865,24 +768,23 @@ public static class RunProcessor
                     upper = prep.ToSampleValue(hi);
                 }
 
-                b.InOriginalSample(prep, value, lower, upper);
-                b.Notes.AddOriginalSample();
+                b.InOriginalSample(value, lower, upper);
             }
             catch (ArgumentException e)
             {
-                b.Notes.Add("No result in the original sample: the preparation does not fit the measured concentration (" + e.Message + ").");
+                b.AddNote("No result in the original sample: the preparation does not fit the measured concentration (" + e.Message + ").");
             }
         }
 
         // Grubbs' test on the ratios of ≥ 3 replicate injections: flags a suspect one, which stays in the mean.
-        private void Outlier(AnalyteMethod a, ResultBuilder b, List<Injection> injections, IReadOnlyList<RunInjection> used)
+        private void Outlier(AnalyteMethod a, AnalyteResult b, double[] ratios, int count, IReadOnlyList<RunInjection> used)
         {
-            if (injections.Count < 3)
+            if (count < 3)
             {
                 return;
             }
 
-            OutlierTestResult g = GrubbsTest.Evaluate(injections.Select(i => i.Ratio).ToArray(), _method.ReplicateOutlierSignificance, OutlierSide.TwoSided);
+            OutlierTestResult g = GrubbsTest.Evaluate(ratios.AsSpan(0, count).ToArray(), _method.ReplicateOutlierSignificance, OutlierSide.TwoSided);
             if (!g.IsOutlier)
             {
                 return;
@@ -890,89 +792,108 @@ public static class RunProcessor
 
             RunInjection suspect = used[g.SuspectIndex];
             string text = "ratio " + Text.G(g.SuspectValue) + " is a suspect outlier by Grubbs' test (G = " + Text.G(g.Statistic) + " > " + Text.G(g.CriticalValue)
-                + ", n = " + Text.I(injections.Count) + ", two-sided α = " + Text.G(g.SignificanceLevel) + "); kept in the mean.";
+                + ", n = " + Text.I(count) + ", two-sided α = " + Text.G(g.SignificanceLevel) + "); kept in the mean.";
             b.Qualifiers |= ResultQualifiers.SuspectReplicate;
-            b.Notes.Add("Injection " + Text.I(suspect.Order) + ": " + text);
+            b.AddNote("Injection " + Text.I(suspect.Order) + ": " + text);
             _rows[suspect.Order].Reasons.Add(a.Analyte + ": " + text);
         }
 
-        private void Quantify(AnalyteMethod a, int ai, AnalyteCalibration cal, ResultBuilder b, InjectionStatus success)
+        // Reads the sample's mean ratio off the calibration; states: the RowStates of b's rows. Null when not quantified.
+        private QuantitationEstimate? Quantify(AnalyteContext c, AnalyteResult b, RowState[] states, InjectionStatus success)
         {
-            // Usually every row is valid: then the rows themselves are the rows used.
+            AnalyteMethod a = c.Method;
+            int ai = c.Index;
             RunInjection[] rows = b.Rows;
-            var injections = new List<Injection>(rows.Length);
+            double[] ratios = states.Length <= _ratios.Length ? _ratios : new double[states.Length];
+            int count = 0;
             List<RunInjection>? setAside = null;
-            foreach (RunInjection r in rows)
+            for (int k = 0; k < rows.Length; k++)
             {
-                (Injection? inj, string? why) = Signal(_rows[r.Order], ai, a);
-                if (inj is null)
+                RunInjection r = rows[k];
+                string? why = Ratio(states[k], ai, c.InternalStandardIndex, a.InternalStandard, out double ratio);
+                if (why is not null)
                 {
-                    _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
+                    states[k].Set(ai, a.Analyte, InjectionStatus.Excluded, why);
                     b.Qualifiers |= ResultQualifiers.MissingOrInvalidSignal;
-                    b.Notes.Add("Injection " + Text.I(r.Order) + ": " + why);
+                    b.AddNote("Injection " + Text.I(r.Order) + ": " + why);
                     (setAside ??= new List<RunInjection>()).Add(r);
                     continue;
                 }
 
-                injections.Add(inj);
+                ratios[count++] = ratio;
             }
 
+            // Usually every row is valid: then the rows themselves are the rows used.
             IReadOnlyList<RunInjection> used = setAside is null ? rows : rows.Where(r => !setAside.Contains(r)).ToList();
 
-            if (cal.Calibration is not RatioCalibration calibration)
+            if (c.Calibration.Calibration is not RatioCalibration calibration)
             {
                 b.Qualifiers |= ResultQualifiers.NotQuantified;
-                b.Notes.Add("Not quantified: no calibration (" + cal.Failure + ").");
+                b.AddNote("Not quantified: no calibration (" + c.Calibration.Failure + ").");
                 foreach (RunInjection r in used)
                 {
                     _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "no calibration for this analyte.");
                 }
 
-                return;
+                return null;
             }
 
-            if (injections.Count == 0)
+            if (count == 0)
             {
                 b.Qualifiers |= ResultQualifiers.NotQuantified;
-                b.Notes.Add("Not quantified: no valid injection.");
-                return;
+                b.AddNote("Not quantified: no valid injection.");
+                return null;
             }
 
-            Concentration cIs = _method.InternalStandardConcentrations[a.InternalStandard];
+            Concentration cIs = c.InternalStandardConcentration;
+            QuantitationEstimate q;
             try
             {
-                UnknownSample sample = UnknownSample.Create(b.Id, cIs, injections.ToArray());
-                b.Quantified(calibration, sample, _method, used, SampleQuantitation.Estimate(calibration, sample, _method.ConfidenceLevel, _method.IntervalMethod));
+                if (string.IsNullOrWhiteSpace(b.SampleId) || !(cIs.Value > 0))
+                {
+                    // What UnknownSample refuses: let it say why.
+                    _ = UnknownSample.Create(b.SampleId, cIs, new Injection(1, 1));
+                }
+
+                // The mean as UnknownSample.MeanResponse forms it: summed in order from the first ratio.
+                double sum = ratios[0];
+                for (int k = 1; k < count; k++)
+                {
+                    sum += ratios[k];
+                }
+
+                q = SampleQuantitation.Estimate(calibration, b.SampleId, cIs, sum / count, count, _method.ConfidenceLevel, _method.IntervalMethod);
             }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException)
             {
                 b.Qualifiers |= ResultQualifiers.NotQuantified;
-                b.Notes.Add("Not quantified: " + e.Message);
+                b.AddNote("Not quantified: " + e.Message);
                 foreach (RunInjection r in used)
                 {
                     _rows[r.Order].Set(ai, a.Analyte, InjectionStatus.Excluded, "could not be read off the calibration.");
                 }
 
-                return;
+                return null;
             }
 
-            b.Notes.AddUsedInjections();
-            if (b.Estimate!.Value.IsExtrapolated)
+            b.Quantified(setAside is null ? null : used, q.MeanResponse, q.Concentration, q.Lower, q.Upper);
+            if (q.IsExtrapolated)
             {
                 b.Qualifiers |= ResultQualifiers.Extrapolated;
             }
 
-            if (!cal.IsAccepted)
+            if (c.CalibrationFailedNote is string failed)
             {
                 b.Qualifiers |= ResultQualifiers.CalibrationRejected;
-                b.Notes.Add("The calibration failed " + cal.Verdict!.RuleSet.Name + ".");
+                b.AddNote(failed);
             }
 
-            Outlier(a, b, injections, used);
+            Outlier(a, b, ratios, count, used);
+            int isIndex = c.InternalStandardIndex;
             for (int k = 0; k < used.Count; k++)
             {
                 RunInjection r = used[k];
-                RowState st = _rows[r.Order];
+                RowState st = setAside is null ? states[k] : _rows[r.Order];
                 double signal = st.AnalyteSignals[ai];
                 st.Set(ai, a.Analyte, success, NonPositive(signal));
                 if (signal <= 0)
@@ -980,12 +901,14 @@ public static class RunProcessor
                     b.Qualifiers |= ResultQualifiers.NonPositiveAnalyteSignal;
                 }
 
-                if (RecoveryOf(st, a.InternalStandard) is { WithinWindow: false } rec)
+                if (st.Recoveries[isIndex] is { WithinWindow: false } rec)
                 {
                     b.Qualifiers |= ResultQualifiers.InternalStandardRecoveryOutOfWindow;
-                    b.Notes.Add("Injection " + Text.I(r.Order) + ": IS " + a.InternalStandard + " recovery " + Text.F(rec.RecoveryPercent!.Value, 1) + " % outside " + _method.RecoveryWindow + ".");
+                    b.AddNote("Injection " + Text.I(r.Order) + ": IS " + a.InternalStandard + " recovery " + Text.F(rec.RecoveryPercent!.Value, 1) + " % outside " + _method.RecoveryWindow + ".");
                 }
             }
+
+            return q;
         }
     }
 }

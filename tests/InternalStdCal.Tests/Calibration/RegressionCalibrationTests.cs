@@ -284,7 +284,7 @@ public class RegressionCalibrationTests
     }
 
     // Five levels (1, 2, 4, 8, 16 µg/L), three injections each, ratio = 0.1·x + curvature·x² with ±0.2 % scatter.
-    private static List<CalibrationStandard> Replicated(double curvature = 0)
+    internal static List<CalibrationStandard> Replicated(double curvature = 0)
     {
         double[] x = { 1, 2, 4, 8, 16 };
         double[] scatter = { -0.002, 0.0005, 0.0015 };

@@ -64,6 +64,96 @@ public class RunProcessorThreadSafetyTests
     }
 
     [Fact]
+    public void Process_ReportedValuesAndNotesFirstReadFromManyThreads_SameInstancesAndEqualToSerialValues()
+    {
+        // Reported values, result notes, QC notes and calibration notes (with the diagnostics they report on) are
+        // made on first read: many threads reading them first must all get one instance, equal to a serial read.
+        RunReport serial = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+        for (int attempt = 0; attempt < 10; attempt++)
+        {
+            RunReport shared = RunResultsJsonTests.ProcessDemo(DriftRule.Magnitude(10));
+            var seen = new (object? Reported, object Notes)[8][];
+            var qcNotes = new object[8][];
+            var calibrationNotes = new object?[8][];
+            Parallel.For(0, seen.Length, i =>
+            {
+                seen[i] = shared.Results.Select(r => ((object?)r.Reported, (object)r.Notes)).ToArray();
+                qcNotes[i] = shared.QualityControl.Select(c => (object)c.Notes).ToArray();
+                calibrationNotes[i] = shared.Calibrations.Select(c => (object?)c.Calibration?.Notes).ToArray();
+            });
+            for (int k = 0; k < shared.Results.Count; k++)
+            {
+                Assert.All(seen, s => Assert.Same(seen[0][k].Reported, s[k].Reported));
+                Assert.All(seen, s => Assert.Same(seen[0][k].Notes, s[k].Notes));
+                Assert.Equal(serial.Results[k].Reported, shared.Results[k].Reported);
+                Assert.Equal(serial.Results[k].Notes, shared.Results[k].Notes);
+            }
+
+            for (int k = 0; k < shared.QualityControl.Count; k++)
+            {
+                Assert.All(qcNotes, s => Assert.Same(qcNotes[0][k], s[k]));
+                Assert.Equal(serial.QualityControl[k].Notes, shared.QualityControl[k].Notes);
+            }
+
+            for (int k = 0; k < shared.Calibrations.Count; k++)
+            {
+                Assert.All(calibrationNotes, s => Assert.Same(calibrationNotes[0][k], s[k]));
+                Assert.Equal(serial.Calibrations[k].Calibration?.Notes, shared.Calibrations[k].Calibration?.Notes);
+            }
+        }
+    }
+
+    [Theory]
+    [InlineData(CalibrationModel.Linear, 0.0)]
+    [InlineData(CalibrationModel.Linear, 0.004)]
+    [InlineData(CalibrationModel.LinearThroughOrigin, 0.0)]
+    [InlineData(CalibrationModel.Quadratic, 0.004)]
+    public void RegressionCalibration_DiagnosticsFirstUsedFromManyThreads_SameInstancesEqualToSerialValues(CalibrationModel model, double curvature)
+    {
+        // Lack of fit, Mandel's test, variance homogeneity and the standards' standardised residuals (read from the
+        // fit's lazily made residual views) are computed on first use. Invented replicated standards
+        // (3 injections at 5 levels, so all three tests are computed); the check is equality with a serial first use,
+        // whichever of the tests or the notes a thread reads first.
+        List<CalibrationStandard> standards = RegressionCalibrationTests.Replicated(curvature);
+        RegressionCalibration reference = RegressionCalibration.Fit(standards, model, Weighting.InverseX);
+        string expected = Describe(reference.LackOfFit, reference.Mandel, reference.VarianceHomogeneity, reference.Notes);
+        double?[] expectedResiduals = StandardizedResiduals(reference);
+        Assert.Contains(expectedResiduals, z => z is not null);
+        Assert.NotNull(reference.LackOfFit);
+        Assert.NotNull(reference.Mandel);
+        Assert.NotNull(reference.VarianceHomogeneity);
+
+        for (int attempt = 0; attempt < 20; attempt++)
+        {
+            RegressionCalibration shared = RegressionCalibration.Fit(standards, model, Weighting.InverseX);
+            var seen = new (object? Lof, object? Mandel, object? Homogeneity, object Notes)[10];
+            var residuals = new double?[10][];
+            Parallel.For(0, seen.Length, i =>
+            {
+                // Each thread starts with a different member, so any of them may trigger the computation.
+                object first = (i % 5) switch
+                {
+                    0 => (object?)shared.LackOfFit ?? string.Empty,
+                    1 => (object?)shared.Mandel ?? string.Empty,
+                    2 => (object?)shared.VarianceHomogeneity ?? string.Empty,
+                    3 => StandardizedResiduals(shared),
+                    _ => shared.Notes,
+                };
+                residuals[i] = StandardizedResiduals(shared);
+                seen[i] = (shared.LackOfFit, shared.Mandel, shared.VarianceHomogeneity, shared.Notes);
+                Assert.NotNull(first);
+            });
+            Assert.All(seen, x => Assert.Same(seen[0].Lof, x.Lof));
+            Assert.All(seen, x => Assert.Same(seen[0].Mandel, x.Mandel));
+            Assert.All(seen, x => Assert.Same(seen[0].Homogeneity, x.Homogeneity));
+            Assert.All(seen, x => Assert.Same(seen[0].Notes, x.Notes));
+            Assert.Equal(expected, Describe(shared.LackOfFit, shared.Mandel, shared.VarianceHomogeneity, shared.Notes));
+            Assert.All(residuals, r => Assert.Equal(expectedResiduals, r));
+            Assert.Equal(reference.Summary(), shared.Summary());
+        }
+    }
+
+    [Fact]
     public void Process_ValuesKeptOnTheResult_EqualTheDeferredQuantitationAndBackCalculation()
     {
         // The measured value, interval and original-sample values stored on a result are the ones the full
@@ -122,5 +212,20 @@ public class RunProcessorThreadSafetyTests
             Assert.Equal(serial.ShortestInterval.Lower, p.ShortestInterval.Lower);
             Assert.Equal(serial.SymmetricInterval.Upper, p.SymmetricInterval.Upper);
         });
+    }
+
+    // Standardised residuals of every level and injection, in order.
+    private static double?[] StandardizedResiduals(RegressionCalibration calibration) =>
+        calibration.Standards.SelectMany(s => s.Injections.Select(i => i.StandardizedResidual).Prepend(s.StandardizedResidual)).ToArray();
+
+    // Every number of the three tests in round-trip form, and the notes: equal text means bit-identical values.
+    private static string Describe(LackOfFitTest? lof, MandelTest? mandel, VarianceHomogeneityTest? homogeneity, IReadOnlyList<string> notes)
+    {
+        static string R(double v) => v.ToString("R", System.Globalization.CultureInfo.InvariantCulture);
+        static string F(FTestResult t) => R(t.Statistic) + " " + R(t.CriticalValue) + " " + R(t.PValue) + " " + t.NumeratorDegreesOfFreedom + " " + t.DenominatorDegreesOfFreedom;
+        return (lof is null ? "-" : R(lof.PureErrorSumOfSquares) + " " + R(lof.LackOfFitSumOfSquares) + " " + F(lof.Test)) + "|"
+            + (mandel is null ? "-" : R(mandel.ResidualStandardDeviationLinear) + " " + R(mandel.ResidualStandardDeviationQuadratic) + " " + R(mandel.DifferenceOfVariances) + " " + F(mandel.Test)) + "|"
+            + (homogeneity is null ? "-" : R(homogeneity.VarianceLowest) + " " + R(homogeneity.VarianceHighest) + " " + F(homogeneity.Test)) + "|"
+            + string.Join("\n", notes);
     }
 }
