@@ -226,6 +226,20 @@ public class SampleQuantitationTests
     }
 
     [Fact]
+    public void Quantify_OneInjectionBeyondTheParabola_IsNotedAndLeftOutOfThePerInjectionList()
+    {
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Quadratic);
+
+        // Minimum of the fitted parabola y ≈ −53.7 (field-reference §1.4): the mean ratio −25 is read off, the
+        // second injection's −100 is not.
+        QuantitationResult r = SampleQuantitation.Quantify(cal, UnknownSample.Create("U", Concentration.From(1, ConcentrationUnit.NanogramPerLitre), new Injection(50, 1), new Injection(-100, 1)));
+
+        Assert.Single(r.InjectionConcentrations);
+        Assert.Null(r.InjectionStandardDeviation);
+        Assert.Contains("Injection #2 (ratio -100) cannot be read off the calibration function; left out of the per-injection list.", r.Notes);
+    }
+
+    [Fact]
     public void Quantify_QuadraticNeverReachingTheResponse_IsRefusedNamingTheSample()
     {
         RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Quadratic);
