@@ -252,6 +252,21 @@ public class SampleQuantitationTests
     }
 
     [Fact]
+    public void Estimate_QuadraticNeverReachingTheResponse_ThrowsWhatQuantifyThrows()
+    {
+        // The batch path (used by run processing) must refuse the same mean ratio with the same message.
+        RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Quadratic);
+        Concentration cIs = Concentration.From(1, ConcentrationUnit.NanogramPerLitre);
+        var quantify = Assert.Throws<ArgumentException>(() => SampleQuantitation.Quantify(cal, UnknownSample.Create("LOWEST", cIs, new Injection(-100, 1))));
+
+        var estimate = Assert.Throws<ArgumentException>(() => SampleQuantitation.Estimate(cal, "LOWEST", cIs, -100, 1, 0.95, InverseIntervalMethod.Symmetric));
+
+        Assert.Equal("sample", estimate.ParamName);
+        Assert.Equal(quantify.Message, estimate.Message);
+        Assert.IsType<ArgumentOutOfRangeException>(estimate.InnerException);
+    }
+
+    [Fact]
     public void Quantify_BetweenBlankAndLowestStandard_IsFlaggedBelowLowestStandard()
     {
         RegressionCalibration cal = RegressionCalibration.Fit(FieldReferenceStandards.Fluorescence(), CalibrationModel.Linear);
