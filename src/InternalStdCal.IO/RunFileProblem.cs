@@ -71,7 +71,7 @@ public sealed class RunFileProblem : IEquatable<RunFileProblem>
     public override bool Equals(object? obj) => Equals(obj as RunFileProblem);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Line * 397) ^ ColumnNumber ^ StringComparer.Ordinal.GetHashCode(Message);
+    public override int GetHashCode() => (Line, ColumnNumber, Message).GetHashCode();
 
     /// <summary>Prints e.g. "line 7, column 5 'analyte:Cd-111', value 'abc': not a number".</summary>
     /// <returns>The text (invariant culture).</returns>

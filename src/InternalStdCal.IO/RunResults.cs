@@ -531,7 +531,7 @@ public sealed record DriftResult
         && SlopeSignificant == other.SlopeSignificant && Failure == other.Failure && Flagged == other.Flagged;
 
     /// <inheritdoc />
-    public override int GetHashCode() => ((int)Kind * 397) ^ StringComparer.Ordinal.GetHashCode(Name);
+    public override int GetHashCode() => (Kind, Name).GetHashCode();
 
     internal static DriftResult From(DriftCheck check)
     {

@@ -124,6 +124,5 @@ public sealed class CalibrationStandard : IEquatable<CalibrationStandard>
     public override bool Equals(object? obj) => Equals(obj as CalibrationStandard);
 
     /// <inheritdoc />
-    public override int GetHashCode() =>
-        (StringComparer.Ordinal.GetHashCode(Label) * 397) ^ AnalyteConcentration.GetHashCode() ^ (_injections.Length * 31);
+    public override int GetHashCode() => (Label, AnalyteConcentration, _injections.Length).GetHashCode();
 }

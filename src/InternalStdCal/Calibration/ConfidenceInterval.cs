@@ -76,15 +76,7 @@ public readonly struct ConfidenceInterval : IEquatable<ConfidenceInterval>
     public override bool Equals(object? obj) => obj is ConfidenceInterval other && Equals(other);
 
     /// <inheritdoc/>
-    public override int GetHashCode()
-    {
-        unchecked
-        {
-            int hash = Lower.GetHashCode();
-            hash = (hash * 397) ^ Upper.GetHashCode();
-            return (hash * 397) ^ ConfidenceLevel.GetHashCode();
-        }
-    }
+    public override int GetHashCode() => (Lower, Upper, ConfidenceLevel).GetHashCode();
 
     /// <summary>Invariant-culture text such as <c>[1.25, 1.75] (95%)</c>.</summary>
     /// <returns>The interval as text.</returns>

@@ -62,7 +62,7 @@ public sealed class Injection : IEquatable<Injection>
     public override bool Equals(object? obj) => Equals(obj as Injection);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Normalize(AnalyteSignal).GetHashCode() * 397) ^ InternalStandardSignal.GetHashCode();
+    public override int GetHashCode() => (Normalize(AnalyteSignal), InternalStandardSignal).GetHashCode();
 
     // +0 and -0 compare equal; make them hash equal too.
     private static double Normalize(double value) => value == 0 ? 0 : value;

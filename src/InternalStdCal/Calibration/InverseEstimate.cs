@@ -85,20 +85,8 @@ public readonly struct InverseEstimate : IEquatable<InverseEstimate>
     public override bool Equals(object? obj) => obj is InverseEstimate other && Equals(other);
 
     /// <inheritdoc/>
-    public override int GetHashCode()
-    {
-        unchecked
-        {
-            int hash = Value.GetHashCode();
-            hash = (hash * 397) ^ StandardError.GetHashCode();
-            hash = (hash * 397) ^ Interval.GetHashCode();
-            hash = (hash * 397) ^ DegreesOfFreedom;
-            hash = (hash * 397) ^ Replicates;
-            hash = (hash * 397) ^ MeanResponse.GetHashCode();
-            hash = (hash * 397) ^ UnknownWeight.GetHashCode();
-            return (hash * 397) ^ (int)Extrapolation;
-        }
-    }
+    public override int GetHashCode() =>
+        (Value, StandardError, Interval, DegreesOfFreedom, Replicates, MeanResponse, UnknownWeight, Extrapolation).GetHashCode();
 
     /// <summary>Invariant text such as <c>6.2072 ± 0.6163 (95%)</c>, shortest round-trip digits (as <see cref="InversePrediction.ToString"/>).</summary>
     /// <returns>Text for display.</returns>

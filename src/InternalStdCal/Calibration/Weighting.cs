@@ -144,19 +144,7 @@ public sealed class Weighting : IEquatable<Weighting>
     public override bool Equals(object? obj) => Equals(obj as Weighting);
 
     /// <inheritdoc/>
-    public override int GetHashCode()
-    {
-        unchecked
-        {
-            int hash = (int)Scheme;
-            foreach (double v in _values)
-            {
-                hash = (hash * 397) ^ v.GetHashCode();
-            }
-
-            return hash;
-        }
-    }
+    public override int GetHashCode() => (Scheme, _values.Length).GetHashCode();
 
     /// <summary>The <see cref="Name"/>, with the number of values for per-point schemes, e.g. "1/s² (6 values)".</summary>
     /// <returns>Text for display.</returns>

@@ -81,5 +81,5 @@ public sealed class Coverage : IEquatable<Coverage>
     public override bool Equals(object? obj) => Equals(obj as Coverage);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Factor.GetHashCode() * 397) ^ Probability.GetHashCode();
+    public override int GetHashCode() => (Factor, Probability).GetHashCode();
 }

@@ -216,7 +216,7 @@ public sealed class DecisionRule : IEquatable<DecisionRule>
     public override bool Equals(object? obj) => Equals(obj as DecisionRule);
 
     /// <inheritdoc />
-    public override int GetHashCode() => ((int)Kind * 397) ^ ((int)Mode * 31) ^ Parameter.GetHashCode() ^ StringComparer.Ordinal.GetHashCode(Name);
+    public override int GetHashCode() => (Kind, Mode, Parameter, Name).GetHashCode();
 
     private ComplianceDecision AssessResult(SpecificationLimit limit, Measured<Concentration> result, Coverage? coverage)
     {

@@ -77,7 +77,7 @@ public sealed class SpecificationLimit : IEquatable<SpecificationLimit>
     public override bool Equals(object? obj) => Equals(obj as SpecificationLimit);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Value.GetHashCode() * 397) ^ (int)Direction ^ (Name is null ? 0 : StringComparer.Ordinal.GetHashCode(Name));
+    public override int GetHashCode() => (Value, Direction, Name).GetHashCode();
 
     /// <summary>Converts a result to the limit's unit; a result of another kind is refused.</summary>
     internal double ValueOf(Concentration result, string paramName)

@@ -69,7 +69,7 @@ public sealed class ReportedValue : IEquatable<ReportedValue>
     public override bool Equals(object? obj) => Equals(obj as ReportedValue);
 
     /// <inheritdoc />
-    public override int GetHashCode() => ((((int)Status * 397) ^ Estimate.GetHashCode()) * 397) ^ (Limit?.GetHashCode() ?? 0);
+    public override int GetHashCode() => (Status, Estimate, Limit).GetHashCode();
 
     private static string Significant(Concentration c, int digits)
     {

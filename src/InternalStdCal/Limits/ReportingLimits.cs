@@ -121,7 +121,7 @@ public sealed class ReportingLimits : IEquatable<ReportingLimits>
     public override bool Equals(object? obj) => Equals(obj as ReportingLimits);
 
     /// <inheritdoc />
-    public override int GetHashCode() => ((DetectionLimit?.GetHashCode() ?? 0) * 397) ^ QuantificationLimit.GetHashCode();
+    public override int GetHashCode() => (DetectionLimit, QuantificationLimit).GetHashCode();
 
     /// <summary>Prints "LOD 0.15 µg/L, LOQ 0.5 µg/L" (round-trip numbers).</summary>
     /// <returns>The text.</returns>

@@ -80,7 +80,7 @@ public readonly struct Purity : IEquatable<Purity>
     public override bool Equals(object? obj) => obj is Purity other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (MassFraction.GetHashCode() * 397) ^ StandardUncertainty.GetHashCode() ^ (int)Evaluation;
+    public override int GetHashCode() => (MassFraction, StandardUncertainty, Evaluation).GetHashCode();
 
     /// <summary>Exact equality.</summary>
     /// <param name="left">First operand.</param>

@@ -318,7 +318,7 @@ public readonly struct Concentration : IQuantity<Concentration>, IComparable
     public override bool Equals(object? obj) => obj is Concentration other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() => ((int)Kind * 397) ^ BaseValue.GetHashCode();
+    public override int GetHashCode() => (Kind, BaseValue).GetHashCode();
 
     /// <summary>Orders two concentrations of the same kind by amount.</summary>
     /// <param name="other">A concentration of the same kind.</param>

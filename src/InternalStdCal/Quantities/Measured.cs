@@ -253,7 +253,7 @@ public readonly struct Measured<T> : IEquatable<Measured<T>>, IFormattable
     public override bool Equals(object? obj) => obj is Measured<T> other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Value.GetHashCode() * 397) ^ StandardUncertainty.GetHashCode() ^ (int)Evaluation;
+    public override int GetHashCode() => (Value, StandardUncertainty, Evaluation).GetHashCode();
 
     /// <summary>Exact equality.</summary>
     /// <param name="left">First operand.</param>

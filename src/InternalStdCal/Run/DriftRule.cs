@@ -89,15 +89,7 @@ public sealed class DriftRule : IEquatable<DriftRule>
     public override bool Equals(object? obj) => Equals(obj as DriftRule);
 
     /// <inheritdoc/>
-    public override int GetHashCode()
-    {
-        unchecked
-        {
-            int hash = (int)Criterion;
-            hash = (hash * 397) ^ LimitPercentOverRun.GetHashCode();
-            return (hash * 397) ^ ConfidenceLevel.GetHashCode();
-        }
-    }
+    public override int GetHashCode() => (Criterion, LimitPercentOverRun, ConfidenceLevel).GetHashCode();
 
     /// <summary>Text such as <c>|drift over run| &gt; 10 % of mean and 95 % slope interval excludes 0</c>.</summary>
     /// <returns>The rule as text (invariant culture).</returns>

@@ -90,7 +90,7 @@ public sealed class InjectionSignals : IEquatable<InjectionSignals>
     public override bool Equals(object? obj) => Equals(obj as InjectionSignals);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (_analytes.Count * 397) ^ _internalStandards.Count;
+    public override int GetHashCode() => (_analytes.Count, _internalStandards.Count).GetHashCode();
 
     /// <summary>Prints "Pb = 1200, Cd = 35; IS Bi = 50000" (invariant culture).</summary>
     /// <returns>The text.</returns>

@@ -143,7 +143,7 @@ public sealed class SamplePreparation : IEquatable<SamplePreparation>
     public override bool Equals(object? obj) => Equals(obj as SamplePreparation);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (_dilutions.Length * 397) ^ (SampleMass?.GetHashCode() ?? 0);
+    public override int GetHashCode() => (_dilutions.Length, SampleMass).GetHashCode();
 
     /// <summary>Prints "total DF 50 (2 steps)", with the digest for a solid sample.</summary>
     /// <returns>The text.</returns>

@@ -56,7 +56,7 @@ public readonly struct CoverageInterval : IEquatable<CoverageInterval>
     public override bool Equals(object? obj) => obj is CoverageInterval other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() => (Lower.GetHashCode() * 397) ^ Upper.GetHashCode() ^ Probability.GetHashCode() ^ StringComparer.Ordinal.GetHashCode(Unit);
+    public override int GetHashCode() => (Lower, Upper, Probability, Unit).GetHashCode();
 
     /// <summary>Prints e.g. "[9.8, 10.2] mg/L (95 %)", or "[9.8, 10.2] (95 %)" without a unit (invariant culture).</summary>
     /// <returns>The text.</returns>

@@ -64,9 +64,7 @@ public readonly struct InputCorrelation : IEquatable<InputCorrelation>
     public override bool Equals(object? obj) => obj is InputCorrelation other && Equals(other);
 
     /// <inheritdoc />
-    public override int GetHashCode() =>
-        ((FirstInput is null ? 0 : StringComparer.Ordinal.GetHashCode(FirstInput)) * 397)
-        ^ (SecondInput is null ? 0 : StringComparer.Ordinal.GetHashCode(SecondInput)) ^ Coefficient.GetHashCode();
+    public override int GetHashCode() => (FirstInput, SecondInput, Coefficient).GetHashCode();
 
     /// <summary>Prints e.g. "r(V1, V2) = 0.5" (invariant culture).</summary>
     /// <returns>The text.</returns>
