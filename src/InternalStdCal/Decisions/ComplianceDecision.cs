@@ -152,11 +152,10 @@ public sealed class ComplianceDecision
         text.Append(": ");
         text.Append(Replicates is int n ? "mean of " + n.ToString(CultureInfo.InvariantCulture) + " replicates " : "result ");
         text.Append(C(Result)).Append(" is ");
-        string decisionLimit = binary ? "decision limit " : string.Empty;
         text.Append(Outcome switch
         {
-            ComplianceOutcome.Compliant => (upper ? "at or below the " : "at or above the ") + (binary ? decisionLimit : "acceptance limit ") + C(AcceptanceLimit),
-            ComplianceOutcome.NonCompliant => (upper ? "above the " : "below the ") + (binary ? decisionLimit : "rejection limit ") + C(RejectionLimit),
+            ComplianceOutcome.Compliant => (upper ? "at or below the " : "at or above the ") + (binary ? "decision limit " : "acceptance limit ") + C(AcceptanceLimit),
+            ComplianceOutcome.NonCompliant => (upper ? "above the " : "below the ") + (binary ? "decision limit " : "rejection limit ") + C(RejectionLimit),
             _ => "between the acceptance limit " + C(AcceptanceLimit) + " and the rejection limit " + C(RejectionLimit),
         });
         text.Append(" of the ").Append(Limit).Append(". Rule: ").Append(Rule.Name);

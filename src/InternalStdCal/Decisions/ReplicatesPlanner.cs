@@ -194,6 +194,8 @@ public static class ReplicatesPlanner
         int n = (int)Math.Min(MaxReplicates, Math.Max(2, Math.Ceiling(normal)));
         if (PowerUnchecked(effect, n, alpha) >= power)
         {
+            // Only for a wanted power below α does the normal approximation overshoot (the z test is uniformly more
+            // powerful than the t test): step down.
             while (n > 2 && PowerUnchecked(effect, n - 1, alpha) >= power)
             {
                 n--;

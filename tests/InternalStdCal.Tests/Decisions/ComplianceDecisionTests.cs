@@ -65,5 +65,17 @@ public class ComplianceDecisionTests
         Assert.Contains("P(true value < limit)", text, StringComparison.Ordinal);
     }
 
+    // An exact result on the limit is within it (ILAC G8:09/2019 §4.2.1: compliant when x ≤ L): P(beyond) = 0.
+    [Fact]
+    public void Assess_ExactResultOnTheLimit_IsWithinWithCertainty()
+    {
+        ComplianceDecision d = DecisionRule.SimpleAcceptance.Assess(UpperTen, Measured.Exact(Mg(10)));
+
+        Assert.Equal(ComplianceOutcome.Compliant, d.Outcome);
+        Assert.Equal(ProbabilityModel.Exact, d.Model);
+        Assert.Equal(0, d.ProbabilityBeyondLimit);
+        Assert.Equal(1, d.ProbabilityWithinLimit);
+    }
+
     private static Concentration Mg(double value) => Concentration.FromMilligramsPerLitre(value);
 }

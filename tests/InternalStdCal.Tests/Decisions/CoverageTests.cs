@@ -47,4 +47,12 @@ public class CoverageTests
         Printed.Equal("2.57582930", Coverage.WithProbability(0.99).FactorFor(null));
         Printed.Equal("3.16927267", Coverage.WithProbability(0.99).FactorFor(10.7));
     }
+
+    // Printed with six significant digits (the library's text convention).
+    [Fact]
+    public void ToString_ManyDigits_PrintsSixSignificantDigits()
+    {
+        Assert.Equal("k = 2.12346", Coverage.WithFactor(2.1234567).ToString());
+        Assert.Equal("p = 0.987654", Coverage.WithProbability(0.9876543).ToString());
+    }
 }

@@ -362,5 +362,45 @@ public class DecisionRuleTests
         Assert.Equal("name", Assert.Throws<ArgumentException>(() => DecisionRule.SimpleAcceptance.Named(" ")).ParamName);
     }
 
+    // A t test needs ν (one-sided Student t, ISO 3534-1): a type B u has none, and the message says what to do.
+    [Fact]
+    public void OneSidedTTest_ResultWithoutDegreesOfFreedom_ThrowsNamingTheRuleAndTheRemedy()
+    {
+        DecisionRule rule = DecisionRule.OneSidedTTest(0.05, DecisionMode.BinaryGuardedAcceptance);
+
+        var ex = Assert.Throws<ArgumentException>(() => rule.Assess(UpperTen, At(9)));
+
+        Assert.Equal("result", ex.ParamName);
+        Assert.Equal(
+            "Parameter 'result' has no degrees of freedom (u taken as exactly known); the rule '" + rule.Name
+            + "' needs a Student t. Give ν (e.g. Measured.TypeA) or use RiskGuardBand for a known σ. (Parameter 'result')",
+            ex.Message);
+    }
+
+    // A coverage stated with a rule whose guard band is not a multiple of U still reports U = k·u (JCGM 100:2008 §6.2).
+    [Fact]
+    public void Assess_CoverageWithSimpleAcceptance_ReportsTheExpandedUncertainty()
+    {
+        ComplianceDecision d = DecisionRule.SimpleAcceptance.Assess(UpperTen, At(9), Coverage.WithFactor(2));
+
+        Assert.Equal(2, d.CoverageFactor);
+        Assert.Equal(MgL(1), d.ExpandedUncertainty);
+        Assert.Contains("; u = 0.5 mg/L, U = 1 mg/L (k = 2)", d.ToString(), StringComparison.Ordinal);
+        Assert.Null(DecisionRule.SimpleAcceptance.Assess(UpperTen, At(9)).CoverageFactor);
+    }
+
+    // Replicates whose mean overflows a double cannot be assessed (bad input is refused, never NaN; common practice).
+    [Fact]
+    public void Assess_ReplicatesOverflowingADouble_Throws()
+    {
+        Concentration[] replicates = { MgL(1.7e308), MgL(1.7e308) };
+
+        var ex = Assert.Throws<ArgumentException>(() => DecisionRule.SimpleAcceptance.Assess(UpperTen, replicates));
+
+        Assert.Equal("replicates", ex.ParamName);
+        Assert.StartsWith("Parameter 'replicates': the mean or standard deviation of the replicates overflows a double.", ex.Message, StringComparison.Ordinal);
+        Assert.Throws<ArgumentException>(() => ReplicatesPlanner.ForReplicates(UpperTen, replicates, 0.05, 0.95));
+    }
+
     private static Concentration MgL(double value) => Concentration.FromMilligramsPerLitre(value);
 }

@@ -157,6 +157,28 @@ public class ReplicatesPlannerTests
         Assert.Equal("alreadyMeasured", Assert.Throws<ArgumentOutOfRangeException>(() => ReplicatesPlanner.ForEffectSize(1, 0.05, 0.9).WithAlreadyMeasured(-1)).ParamName);
     }
 
+    // A wanted power below α: a one-sided t test with δ > 0 has power above α at every n, so n = 2; the normal
+    // approximation ((z(0.95) + z(0.01))/0.1)² = ((1.64485 − 2.32635)/0.1)² = 46.4 overshoots (computed) and the
+    // planner steps down from it.
+    [Fact]
+    public void ForEffectSize_PowerBelowAlpha_StepsDownToTwoReplicates()
+    {
+        ReplicatePlan plan = ReplicatesPlanner.ForEffectSize(0.1, 0.05, 0.01);
+
+        Assert.Equal(2, plan.Replicates);
+        Assert.Equal(46.44, plan.NormalApproximation, 2);
+        Assert.True(plan.Power > 0.05);
+    }
+
+    // Expected mean and σ are printed with six significant digits.
+    [Fact]
+    public void ToString_ManyDigits_PrintsMeanAndSigmaWithSixSignificantDigits()
+    {
+        string text = ReplicatesPlanner.ForExpectedMean(UpperTen, MgL(9.1234567), MgL(0.51234567), 0.05, 0.95).ToString();
+
+        Assert.Contains(", expected mean 9.12346 mg/L, σ = 0.512346 mg/L; target power 0.95;", text, StringComparison.Ordinal);
+    }
+
     private static Concentration MgL(double value) => Concentration.FromMilligramsPerLitre(value);
 
     // Field-reference §8.2 (COMPUTED): δ/σ = 2, power 0.95 → normal approximation n = 2.71; the plan names the limit,
