@@ -200,4 +200,16 @@ public class DilutionChainTests
             Numeric.AssertRelative(stock.Value.Value, back.Result.Value.Value, 1e-14);
             Numeric.AssertRelative(chain.TotalDilutionFactor, back.TotalDilutionFactor, 1e-15);
         });
+
+    [Fact]
+    public void ToString_FactorsAndConcentrationWithManyDigits_RoundedToG6AndG7()
+    {
+        // 3 mL into 7 mL: DF = 7/3 = 2.333… (G6: 2.33333); 1 mg/L · 3/7 = 0.428571428… mg/L (G7: 0.4285714), computed.
+        DilutionChain chain = DilutionChain.From(
+            PreparedSolution.FromCertificate("Stock", Measured.Exact(Concentration.FromMilligramsPerLitre(1))),
+            DilutionStep.Volumetric(Measured.Exact(Volume.FromMillilitres(3)), Measured.Exact(Volume.FromMillilitres(7))));
+        string[] lines = chain.ToString().Split(new[] { "\r\n", "\n" }, StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal("Dilution chain from Stock: total DF = 2.33333", lines[0]);
+        Assert.Matches(@"^\s*1  3 mL into 7 mL\s+2\.33333\s+2\.33333\s+0\.4285714 mg/L\s+0 mg/L\s+0 %$", lines[4]);
+    }
 }

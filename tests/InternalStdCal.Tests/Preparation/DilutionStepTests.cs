@@ -131,4 +131,61 @@ public class DilutionStepTests
         var ex = Assert.Throws<ArgumentException>(() => stock.Dilute(DilutionStep.GravimetricWithDensity(G(1), G(10), Density.FromGramsPerMillilitre(1), 0)));
         Assert.Contains("needs a mass concentration (GravimetricWithDensity converts it with the density), but 'c' is 10 mmol/L (AmountConcentration)", ex.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void ToString_FactorWithManyDigits_SixSignificantDigits()
+    {
+        // DF = 7/3 = 2.333… computed by hand, printed with six significant digits (G6, as the code formats it).
+        Assert.Equal("3 mL into 7 mL: DF = 2.33333 (u_rel 0 %)", DilutionStep.Volumetric(Ml(3), Ml(7)).ToString());
+    }
+
+    [Fact]
+    public void Volumetric_AliquotLessUncertainThanFinal_RelativeTermsInQuadrature()
+    {
+        // u(DF)/DF = √(0.002² + 0.01²) (JCGM 100:2008 §5.1.6); here the final volume carries the larger term.
+        VolumetricDilution step = DilutionStep.Volumetric(Ml(10, 0.02), Ml(100, 1));
+        Assert.Equal(Math.Sqrt((0.002 * 0.002) + (0.01 * 0.01)), step.DilutionFactorRelativeStandardUncertainty, 15);
+
+        // An exact aliquot leaves the final volume's term alone.
+        Assert.Equal(0.01, DilutionStep.Volumetric(Ml(10), Ml(100, 1)).DilutionFactorRelativeStandardUncertainty, 15);
+    }
+
+    [Theory]
+    [InlineData(0.0, UncertaintyEvaluation.Exact)]
+    [InlineData(0.0051, UncertaintyEvaluation.TypeBStandard)]
+    public void WithDensity_DensityRowEvaluation_ExactOnlyWithoutUncertainty(double densityUncertainty, UncertaintyEvaluation expected)
+    {
+        // A density with u = 0 is an exact input; a stated u is a Type B standard uncertainty (JCGM 100:2008 §4.3).
+        PreparedSolution w = PreparedSolution.FromCertificate("w", Measured.Exact(Concentration.FromMilligramsPerKilogram(1000)));
+        PreparedSolution byVolume = w.Dilute(DilutionStep.VolumetricWithDensity(Ml(5), Ml(100), Density.FromGramsPerMillilitre(1.02), densityUncertainty));
+        UncertaintyContribution row = byVolume.Budget.Contributions[3];
+        Assert.Equal("aliquot density", row.Component);
+        Assert.Equal("g/mL", row.Unit);
+        Assert.Equal(densityUncertainty, row.StandardUncertainty);
+        Assert.Equal(expected, row.Evaluation);
+
+        PreparedSolution g = PreparedSolution.FromCertificate("g", Measured.Exact(Concentration.FromMilligramsPerLitre(1000)));
+        PreparedSolution byMass = g.Dilute(DilutionStep.GravimetricWithDensity(G(1), G(10), Density.FromGramsPerMillilitre(1.02), densityUncertainty));
+        Assert.Equal(expected, byMass.Budget.Contributions[3].Evaluation);
+    }
+
+    [Fact]
+    public void VolumetricWithDensity_MassConcentration_RefusedNamingAcceptedKind()
+    {
+        PreparedSolution stock = PreparedSolution.FromCertificate("c", Measured.Exact(Concentration.FromMilligramsPerLitre(10)));
+        var ex = Assert.Throws<ArgumentException>(() => stock.Dilute(DilutionStep.VolumetricWithDensity(Ml(1), Ml(10), Density.FromGramsPerMillilitre(1), 0)));
+        Assert.Equal("step", ex.ParamName);
+        Assert.StartsWith("Parameter 'step' (1 mL into 10 mL) needs a mass fraction (VolumetricWithDensity converts it with the density), but 'c' is 10 mg/L (MassConcentration).", ex.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Reverse_WithDensity_AmountConcentration_ThrowsNamingUnit()
+    {
+        // The public paths refuse amount concentrations before a density step converts; the internal reverse
+        // (used by SampleResult) is called directly to reach its own check.
+        VolumetricDilution step = DilutionStep.VolumetricWithDensity(Ml(1), Ml(10), Density.FromGramsPerMillilitre(1), 0);
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => step.Reverse(Concentration.From(1, ConcentrationUnit.MillimolePerLitre)));
+        Assert.Equal("unit", ex.ParamName);
+        Assert.StartsWith("Parameter 'unit' was mmol/L; an amount concentration has no mass-based counterpart.", ex.Message, StringComparison.Ordinal);
+    }
 }

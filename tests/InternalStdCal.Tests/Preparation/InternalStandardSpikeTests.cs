@@ -78,4 +78,17 @@ public class InternalStandardSpikeTests
             SpikeSolution(), DilutionStep.Gravimetric(Measured.Exact(Mass.FromGrams(0.1)), Measured.Exact(Mass.FromGrams(10))), SpikeTiming.BeforeSamplePreparation));
         Assert.Equal("addition", ex.ParamName);
     }
+
+    [Fact]
+    public void ToString_AddedBeforePreparation_SaysBefore()
+    {
+        // Same inputs as Create_Uncertainty_RelativeTermsInQuadrature; only the timing differs.
+        InternalStandardSpike spike = InternalStandardSpike.Create(
+            SpikeSolution(0.005),
+            DilutionStep.Volumetric(
+                Measured.WithStandardUncertainty(Volume.FromMicrolitres(100), Volume.FromMicrolitres(0.8)),
+                Measured.WithStandardUncertainty(Volume.FromMillilitres(10), Volume.FromMillilitres(0.02))),
+            SpikeTiming.BeforeSamplePreparation);
+        Assert.Equal("IS 0.100000 mg/L, u = 0.000964 mg/L (0.964 %) in the measured solution; 100 µL into 10 mL; added before sample preparation", spike.ToString());
+    }
 }

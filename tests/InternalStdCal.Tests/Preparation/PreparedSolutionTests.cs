@@ -236,4 +236,40 @@ public class PreparedSolutionTests
         Assert.Equal("Cd stock: 1002.700 mg/L, u = 0.864 mg/L (0.0861 %)", QuamA1(0.07).ToString());
         Assert.Equal("Exact: 5 mg/L, u = 0 mg/L", PreparedSolution.FromCertificate("Exact", Measured.Exact(Concentration.FromMilligramsPerLitre(5))).ToString());
     }
+
+    [Fact]
+    public void FromWeighedSubstance_PurityRow_InGramsPerGram()
+    {
+        UncertaintyContribution purity = QuamA1(0.07).Budget.Contributions[1];
+        Assert.Equal("purity", purity.Component);
+        Assert.Equal("g/g", purity.Unit);
+        Assert.Equal(0.9999, purity.Value);
+        Assert.Equal(0.000058, purity.StandardUncertainty);
+    }
+
+    [Fact]
+    public void FromWeighedSubstanceByMass_BudgetRowsAndSensitivities()
+    {
+        // w = m·P/m_solution: relative sensitivities +1, +1, −1 (exponents of a product/quotient model, JCGM 100:2008 §5.1.3).
+        PreparedSolution stock = PreparedSolution.FromWeighedSubstanceByMass(
+            "Pb stock (w)",
+            Measured.WithStandardUncertainty(Mass.FromMilligrams(50.00), Mass.FromMilligrams(0.02)),
+            Purity.FromMassFraction(0.998, 0.001),
+            Measured.WithStandardUncertainty(Mass.FromGrams(100.00), Mass.FromGrams(0.005)),
+            ConcentrationUnit.MilligramPerKilogram);
+        Assert.Equal(new[] { "substance mass", "purity", "solution mass" }, stock.Budget.Contributions.Select(c => c.Component));
+        Assert.Equal(new[] { 1.0, 1.0, -1.0 }, stock.Budget.Contributions.Select(c => c.Sensitivity));
+        Assert.All(stock.Budget.Contributions, c => Assert.Equal("Pb stock (w)", c.Stage));
+        Assert.Equal("g/g", stock.Budget.Contributions[1].Unit);
+    }
+
+    [Fact]
+    public void RequireKind_AmountConcentrationExpected_ListsAmountUnits()
+    {
+        // No public factory asks for an amount concentration yet; the shared check is reached directly (internal).
+        var ex = Assert.Throws<ArgumentException>(() => PreparedSolution.RequireKind(
+            ConcentrationUnit.MilligramPerLitre, ConcentrationKind.AmountConcentration, "the test says so", "unit"));
+        Assert.Equal("unit", ex.ParamName);
+        Assert.StartsWith("Parameter 'unit' was mg/L (MassConcentration); it must be a AmountConcentration unit (mol/L, mmol/L, µmol/L, nmol/L) because the test says so.", ex.Message, StringComparison.Ordinal);
+    }
 }

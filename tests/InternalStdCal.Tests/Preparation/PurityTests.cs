@@ -51,4 +51,22 @@ public class PurityTests
     [Fact]
     public void Default_RelativeUncertaintyThrows() =>
         Assert.Throws<InvalidOperationException>(() => default(Purity).RelativeStandardUncertainty);
+
+    [Fact]
+    public void Equals_SameFractionDifferentUncertainty_NotEqual()
+    {
+        Purity a = Purity.FromMassFraction(0.99, 0.001);
+        Purity b = Purity.FromMassFraction(0.99, 0.002);
+        Assert.False(a.Equals(b));
+        Assert.False(a == b);
+        Assert.True(a != b);
+        Assert.NotEqual<object>(a, b);
+    }
+
+    [Fact]
+    public void Default_RelativeUncertainty_ThrowsWithExactMessage()
+    {
+        var ex = Assert.Throws<InvalidOperationException>(() => default(Purity).RelativeStandardUncertainty);
+        Assert.Equal("A default(Purity) has mass fraction 0; create purities with Purity.FromMassFraction or Purity.FromTolerance.", ex.Message);
+    }
 }
