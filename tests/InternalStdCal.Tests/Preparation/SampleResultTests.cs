@@ -148,4 +148,53 @@ public class SampleResultTests
         var nullStep = Assert.Throws<ArgumentException>(() => SampleResult.Liquid(c, new DilutionStep[] { null! }));
         Assert.StartsWith("Parameter 'dilutions' has null at index 0", nullStep.Message, StringComparison.Ordinal);
     }
+
+    private static Measured<Mass> G(double v, double u = 0) => Measured.WithStandardUncertainty(Mass.FromGrams(v), Mass.FromGrams(u));
+
+    [Fact]
+    public void Solid_ByDigestMass_BudgetTermsAndText()
+    {
+        // Invented scenario, computed by hand: w = 0.0200 mg/kg · (10 g / 3 g) · 50 g / 0.25 g = 13.3333 mg/kg.
+        SampleResult r = SampleResult.Solid(
+            Measured.WithStandardUncertainty(Concentration.FromMilligramsPerKilogram(0.0200), Concentration.FromMilligramsPerKilogram(0.0004)),
+            G(50, 0.01),
+            G(0.25, 0.0001),
+            new DilutionStep[] { DilutionStep.Gravimetric(G(3), G(10)) },
+            ConcentrationUnit.MilligramPerKilogram);
+        Assert.Equal(40.0 / 3, r.Result.Value.Value, 12);
+
+        // Relative sensitivities of the product/quotient model are the exponents, ±1 (JCGM 100:2008 §5.1.3, §5.1.6):
+        // m_digest in the numerator (+1), m_sample in the denominator (−1); the dilution rows are reversed.
+        Assert.Equal(
+            new[] { ("Measurement", "measured concentration", 1.0), ("Dilution 1: 3 g into 10 g", "aliquot mass", -1.0), ("Dilution 1: 3 g into 10 g", "total mass", 1.0), ("Sample", "digest mass", 1.0), ("Sample", "sample mass", -1.0) },
+            r.Budget.Contributions.Select(c => (c.Stage, c.Component, c.Sensitivity)));
+
+        // Relative terms in quadrature: 2 % (measured), 0.02 % (0.01 g of 50 g), 0.04 % (0.0001 g of 0.25 g).
+        Assert.Equal(Math.Sqrt(Math.Pow(0.02, 2) + Math.Pow(0.0002, 2) + Math.Pow(0.0004, 2)), r.Result.RelativeStandardUncertainty, 14);
+
+        // Computed: u = 13.333 · √(0.02² + 0.0002² + 0.0004²) = 0.267 mg/kg; DF = 10/3 printed to six significant digits.
+        Assert.Equal("Sample: 13.333 mg/kg, u = 0.267 mg/kg (2 %); measured 0.020000 mg/kg, u = 0.000400 mg/kg (2 %); total DF = 3.33333; digest mass 50 g; sample mass 0.25 g", r.ToString());
+    }
+
+    [Fact]
+    public void Solid_ByDigestMass_BadInputs_ThrowNamingParameters()
+    {
+        Measured<Concentration> c = Measured.Exact(Concentration.FromMilligramsPerKilogram(1));
+        DilutionStep[] none = Array.Empty<DilutionStep>();
+
+        var mass = Assert.Throws<ArgumentOutOfRangeException>(() => SampleResult.Solid(c, G(50), G(0), none, ConcentrationUnit.MilligramPerKilogram));
+        Assert.Equal("sampleMass", mass.ParamName);
+        Assert.Equal("Parameter 'sampleMass' was 0 g; it must be a mass > 0. (Parameter 'sampleMass')" + Environment.NewLine + "Actual value was 0.", mass.Message);
+
+        Assert.Equal("dilutions", Assert.Throws<ArgumentNullException>(() => SampleResult.Solid(c, G(50), G(0.25), null!, ConcentrationUnit.MilligramPerKilogram)).ParamName);
+
+        var unit = Assert.Throws<ArgumentException>(() => SampleResult.Solid(c, G(50), G(0.25), none, ConcentrationUnit.MilligramPerLitre));
+        Assert.Equal("resultUnit", unit.ParamName);
+        Assert.Equal("Parameter 'resultUnit' was mg/L (MassConcentration); it must be a MassFraction unit (g/kg, mg/kg, µg/kg, ng/kg, %) because the result refers to the mass of sample. (Parameter 'resultUnit')", unit.Message);
+
+        var kind = Assert.Throws<ArgumentException>(() => SampleResult.Solid(
+            Measured.Exact(Concentration.FromMilligramsPerLitre(1)), G(50), G(0.25), none, ConcentrationUnit.MilligramPerKilogram));
+        Assert.Equal("measured", kind.ParamName);
+        Assert.Equal("Parameter 'measured' was mg/L (MassConcentration); it must be a MassFraction unit (g/kg, mg/kg, µg/kg, ng/kg, %) because a digest made up to a mass must be expressed per mass. (Parameter 'measured')", kind.Message);
+    }
 }

@@ -83,4 +83,39 @@ public class UncertaintyBudgetTests
         Assert.Null(s.Budget.EffectiveDegreesOfFreedom);
         Assert.Equal(0, s.Budget.Contributions[0].Share);
     }
+
+    [Fact]
+    public void ToString_UnroundedInput_PrintsSevenAndFourSignificantDigits()
+    {
+        // Computed: value to 7 significant digits (100.1235), u(x) and ν to 4 (0.1235, 12.35),
+        // u(x)/x = 0.123456 / 100.123456789 = 0.1233 % (4 digits), (uᵢ(y)/y)² = 1.520E-06, ν_eff = ν of the only input.
+        string text = PreparedSolution.FromCertificate(
+            "Stock",
+            Measured.TypeA(Concentration.FromMilligramsPerLitre(100.123456789), Concentration.FromMilligramsPerLitre(0.123456), 12.3456)).Budget.ToString();
+        string nl = Environment.NewLine;
+        Assert.Equal(
+            "Uncertainty budget: 100.123 mg/L, u = 0.123 mg/L (0.123 %), ν_eff = 12.35" + nl +
+            "Model: product/quotient of uncorrelated inputs; relative terms added in quadrature (JCGM 100:2008 §5.1.6)." + nl +
+            "Stage  Component        Value          u(x)         Evaluation  ν      u(x)/x    Sensitivity  (uᵢ(y)/y)²  Share" + nl +
+            "-----------------------------------------------------------------------------------------------------------------" + nl +
+            "Stock  certified value  100.1235 mg/L  0.1235 mg/L  TypeA       12.35  0.1233 %           +1   1.520E-06  100.0 %" + nl,
+            text);
+    }
+
+    [Fact]
+    public void ToString_ZeroResultWithoutDegreesOfFreedom_PrintsNotApplicableAndInfinity()
+    {
+        // A measured zero: no relative values ("n/a"); only Type B input without ν → ν_eff infinite ("∞").
+        string text = SampleResult.Liquid(
+            Measured.WithStandardUncertainty(Concentration.FromMilligramsPerLitre(0), Concentration.FromMilligramsPerLitre(0.5)),
+            Array.Empty<DilutionStep>()).Budget.ToString();
+        string nl = Environment.NewLine;
+        Assert.Equal(
+            "Uncertainty budget: 0.000 mg/L, u = 0.500 mg/L, ν_eff = ∞" + nl +
+            "Model: product/quotient of uncorrelated inputs; relative terms added in quadrature (JCGM 100:2008 §5.1.6)." + nl +
+            "Stage        Component               Value   u(x)      Evaluation     ν  u(x)/x  Sensitivity  (uᵢ(y)/y)²  Share" + nl +
+            "-----------------------------------------------------------------------------------------------------------------" + nl +
+            "Measurement  measured concentration  0 mg/L  0.5 mg/L  TypeBStandard  ∞     n/a           +1         n/a  100.0 %" + nl,
+            text);
+    }
 }
