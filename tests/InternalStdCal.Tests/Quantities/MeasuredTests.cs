@@ -132,6 +132,17 @@ public class MeasuredTests
         Assert.Equal("10.0 mg/L, u = 0.1 mg/L (TypeA, ν = 9)", m.ToString("F1", null));
     }
 
+    // ν is printed with six significant digits (Welch–Satterthwaite gives fractional ν); no ν, no ν part.
+    [Fact]
+    public void ToString_FractionalOrNoDegreesOfFreedom_PrintsSixDigitsOrNothing()
+    {
+        Concentration value = Concentration.FromMilligramsPerLitre(10);
+        Concentration u = Concentration.FromMilligramsPerLitre(0.05);
+
+        Assert.Equal("10 mg/L, u = 0.05 mg/L (TypeA, ν = 12.3457)", Measured.TypeA(value, u, 12.3456789).ToString());
+        Assert.Equal("10 mg/L, u = 0.05 mg/L (TypeBStandard)", Measured.WithStandardUncertainty(value, u).ToString());
+    }
+
     [Fact]
     public void Exact_HasZeroUncertainty()
     {
