@@ -32,12 +32,7 @@ public class InternalStandardSpikeTests
     {
         // u_rel² = u_rel²(spike solution) + u_rel²(V_spike) + u_rel²(V_final) (JCGM 100:2008 §5.1.6):
         // 0.5 %, 0.8 % (100 µL ± 0.8 µL), 0.2 % (10 mL ± 0.02 mL) → √(0.25 + 0.64 + 0.04) % = 0.9644 % (by hand).
-        InternalStandardSpike spike = InternalStandardSpike.Create(
-            SpikeSolution(0.005),
-            DilutionStep.Volumetric(
-                Measured.WithStandardUncertainty(Volume.FromMicrolitres(100), Volume.FromMicrolitres(0.8)),
-                Measured.WithStandardUncertainty(Volume.FromMillilitres(10), Volume.FromMillilitres(0.02))),
-            SpikeTiming.AfterSamplePreparation);
+        InternalStandardSpike spike = HundredMicrolitresIntoTenMillilitres(SpikeTiming.AfterSamplePreparation);
         Assert.Equal(Math.Sqrt(0.93) / 100, spike.Concentration.RelativeStandardUncertainty, 15);
         Assert.False(spike.CorrectsPreparationLosses);
         Assert.Equal(
@@ -82,13 +77,15 @@ public class InternalStandardSpikeTests
     [Fact]
     public void ToString_AddedBeforePreparation_SaysBefore()
     {
-        // Same inputs as Create_Uncertainty_RelativeTermsInQuadrature; only the timing differs.
-        InternalStandardSpike spike = InternalStandardSpike.Create(
-            SpikeSolution(0.005),
-            DilutionStep.Volumetric(
-                Measured.WithStandardUncertainty(Volume.FromMicrolitres(100), Volume.FromMicrolitres(0.8)),
-                Measured.WithStandardUncertainty(Volume.FromMillilitres(10), Volume.FromMillilitres(0.02))),
-            SpikeTiming.BeforeSamplePreparation);
+        InternalStandardSpike spike = HundredMicrolitresIntoTenMillilitres(SpikeTiming.BeforeSamplePreparation);
         Assert.Equal("IS 0.100000 mg/L, u = 0.000964 mg/L (0.964 %) in the measured solution; 100 µL into 10 mL; added before sample preparation", spike.ToString());
     }
+
+    // 100 µL ± 0.8 µL of a spike solution with u_rel 0.5 % made up to 10 mL ± 0.02 mL.
+    private static InternalStandardSpike HundredMicrolitresIntoTenMillilitres(SpikeTiming timing) => InternalStandardSpike.Create(
+        SpikeSolution(0.005),
+        DilutionStep.Volumetric(
+            Measured.WithStandardUncertainty(Volume.FromMicrolitres(100), Volume.FromMicrolitres(0.8)),
+            Measured.WithStandardUncertainty(Volume.FromMillilitres(10), Volume.FromMillilitres(0.02))),
+        timing);
 }
