@@ -49,4 +49,11 @@ public class PropagationTests
         Assert.Equal("degreesOfFreedom", Assert.Throws<ArgumentOutOfRangeException>(() => Propagation.CoverageFactor(0.95, 0.5, "p")).ParamName);
         Assert.Equal("degreesOfFreedom", Assert.Throws<ArgumentOutOfRangeException>(() => Propagation.CoverageFactor(0.95, double.NaN, "p")).ParamName);
     }
+
+    [Fact]
+    public void CoverageFactor_DegreesOfFreedomBelowOne_MessageStatesTheRange()
+    {
+        var e = Assert.Throws<ArgumentOutOfRangeException>(() => Propagation.CoverageFactor(0.95, 0.5, "p"));
+        Assert.StartsWith("Parameter 'degreesOfFreedom' was 0.5; it must be a number >= 1 or +infinity.", e.Message, StringComparison.Ordinal);
+    }
 }
