@@ -37,7 +37,6 @@ internal readonly record struct ReplicateStatistics(double Mean, double Standard
 
         double mean = SampleStatistics.Mean(values);
         double s = SampleStatistics.StandardDeviation(values, mean);
-        // An overflowing sum makes the compensated mean NaN, not ∞.
         if (!(Math.Abs(mean) <= double.MaxValue && s <= double.MaxValue))
         {
             throw new ArgumentException($"Parameter '{paramName}': the mean or standard deviation of the replicates overflows a double.", paramName);

@@ -14,8 +14,8 @@ internal struct CompensatedSum
     private double _hi;
     private double _lo;
 
-    /// <summary>The sum rounded to a double.</summary>
-    internal readonly double Value => _hi + _lo;
+    /// <summary>The sum rounded to a double; ±∞ once a partial sum overflowed (the error term is then NaN).</summary>
+    internal readonly double Value => double.IsInfinity(_hi) ? _hi : _hi + _lo;
 
     internal void Add(double value)
     {
